@@ -1,0 +1,5 @@
+namespace ConsistencyHost.Chemistry.Tests;
+
+internal static class TestAssemblyMarker
+{
+}
