@@ -1,0 +1,48 @@
+using ConsistencyHost.Cli.CommandLine;
+using ConsistencyHost.Cli.Commands;
+
+namespace ConsistencyHost.Cli;
+
+/// <summary>Entry point: one command with subcommands. Usage problems exit with 2 and say why on stderr.</summary>
+public static class Program
+{
+    private const string Help =
+        "consistencyhost - checks NMR and HRMS data reported for a structure\n\n" +
+        "usage:\n  consistencyhost " + CheckCommand.Usage + "\n  consistencyhost " + RulesCommand.Usage +
+        "\n  consistencyhost " + ServeCommand.Usage + "\n";
+
+    public static async Task<int> Main(string[] args)
+    {
+        var stdout = Console.Out;
+        try
+        {
+            return args.Length == 0 ? Usage() : await Dispatch(args[0], args[1..], stdout);
+        }
+        catch (UsageException error)
+        {
+            await Console.Error.WriteLineAsync("error: " + error.Message);
+            return ExitCodes.UnusableInput;
+        }
+    }
+
+    private static async Task<int> Dispatch(string command, string[] rest, TextWriter stdout) => command switch
+    {
+        "check" => CheckCommand.Run(rest, stdout),
+        "rules" => RulesCommand.Run(rest, stdout),
+        "serve" => await ServeCommand.RunAsync(rest, stdout),
+        "help" or "--help" or "-h" => Print(stdout),
+        _ => throw new UsageException($"unknown command '{command}'; expected check, rules or serve"),
+    };
+
+    private static int Print(TextWriter stdout)
+    {
+        stdout.Write(Help);
+        return ExitCodes.Ok;
+    }
+
+    private static int Usage()
+    {
+        Console.Error.Write(Help);
+        return ExitCodes.UnusableInput;
+    }
+}

@@ -1,0 +1,22 @@
+using ConsistencyHost.Engine.Profiles;
+
+namespace ConsistencyHost.Engine;
+
+/// <summary>How the engine is set up: where plugins live, the profiles, and the default deadline.</summary>
+public sealed record EngineOptions
+{
+    /// <summary>The folder holding one sub-folder per plugin.</summary>
+    public required string PluginsPath { get; init; }
+
+    /// <summary>The profile used when a request names none.</summary>
+    public string DefaultProfile { get; init; } = Profile.DefaultName;
+
+    /// <summary>
+    /// Per-rule deadline. Two seconds is generous: the built-in rules take well under a millisecond on a
+    /// typical entry, so only a runaway rule ever meets it.
+    /// </summary>
+    public TimeSpan RuleDeadline { get; init; } = TimeSpan.FromSeconds(2);
+
+    /// <summary>Configured profiles; a "default" profile with every rule at its defaults is added when absent.</summary>
+    public IReadOnlyList<Profile> Profiles { get; init; } = [];
+}

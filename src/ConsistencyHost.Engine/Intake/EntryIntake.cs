@@ -1,0 +1,138 @@
+using ConsistencyHost.Sdk.Entries;
+using ConsistencyHost.Spectra.Model;
+
+namespace ConsistencyHost.Engine.Intake;
+
+/// <summary>
+/// Turns a submission into the immutable <see cref="Entry"/> rules see, reading every text it carries.
+/// Unusable input throws <see cref="EntryInputException"/> naming the field and what was expected.
+/// </summary>
+public sealed class EntryIntake(IntakeLimits limits)
+{
+    /// <summary>Builds the entry or throws <see cref="EntryInputException"/>.</summary>
+    public Entry Build(EntrySubmission submission)
+    {
+        CheckSizes(submission);
+        var spectra = new List<Spectrum>();
+        for (var i = 0; i < submission.Spectra.Count; i++)
+        {
+            spectra.Add(ReadSpectrum(submission.Spectra[i], $"spectra[{i}]"));
+        }
+
+        for (var i = 0; i < submission.ReportedText.Count; i++)
+        {
+            spectra.AddRange(ReportedTextIntake.Read(submission.ReportedText[i], $"reported_text[{i}]"));
+        }
+
+        return new Entry
+        {
+            EntryId = submission.EntryId,
+            Structure = submission.Structure,
+            Spectra = spectra,
+            Claims = new EntryClaims { Formula = string.IsNullOrWhiteSpace(submission.Formula) ? null : submission.Formula.Trim() },
+        };
+    }
+
+    private Spectrum ReadSpectrum(SpectrumSubmission input, string field)
+    {
+        var forms = (input.Signals is null ? 0 : 1) + (input.ReportedText is null ? 0 : 1) + (input.JcampDx is null ? 0 : 1);
+        if (forms != 1)
+        {
+            throw new EntryInputException(field, "give exactly one of peaks, reported_text or jcamp_dx");
+        }
+
+        if (input.ReportedText is not null || input.JcampDx is not null)
+        {
+            var text = input.ReportedText ?? input.JcampDx!;
+            var name = input.ReportedText is not null ? "reported_text" : "jcamp_dx";
+            CheckLength(text, $"{field}.{name}");
+            var read = input.ReportedText is not null
+                ? ReportedTextIntake.ReadOne(text, $"{field}.{name}")
+                : JcampIntake.ReadOne(text, $"{field}.{name}");
+            return Merge(read, input);
+        }
+
+        if (input.Signals!.Count > limits.MaxSignalsPerSpectrum)
+        {
+            throw new EntryInputException($"{field}.peaks", $"has {input.Signals.Count} peaks; the limit is {limits.MaxSignalsPerSpectrum}");
+        }
+
+        var nucleus = NucleusNames.Parse(input.Nucleus);
+        if (nucleus == Nucleus.Unknown)
+        {
+            throw new EntryInputException($"{field}.nucleus", $"'{input.Nucleus}' is not a supported nucleus; expected 1H, 13C, 19F or 31P");
+        }
+
+        CheckSignals(input.Signals, $"{field}.peaks");
+        return Merge(new Spectrum { Nucleus = nucleus, Signals = input.Signals }, input);
+    }
+
+    /// <summary>Values given beside the data win over values read from it; the nucleus must agree.</summary>
+    private static Spectrum Merge(Spectrum read, SpectrumSubmission input) => read with
+    {
+        FrequencyMHz = input.FrequencyMHz ?? read.FrequencyMHz,
+        Solvent = string.IsNullOrWhiteSpace(input.Solvent) ? read.Solvent : input.Solvent.Trim(),
+        TemperatureK = input.TemperatureK ?? read.TemperatureK,
+    };
+
+    private static void CheckSignals(IReadOnlyList<Signal> signals, string field)
+    {
+        for (var i = 0; i < signals.Count; i++)
+        {
+            var s = signals[i];
+            var hasRange = s.RangeLowPpm is not null && s.RangeHighPpm is not null;
+            if (s.ShiftPpm is null && !hasRange)
+            {
+                throw new EntryInputException($"{field}[{i}]", "needs shift_ppm or both range_low_ppm and range_high_ppm");
+            }
+
+            var values = new[] { s.ShiftPpm, s.RangeLowPpm, s.RangeHighPpm };
+            if (values.Any(v => v is { } x && (!double.IsFinite(x) || x < -100 || x > 1000)))
+            {
+                throw new EntryInputException($"{field}[{i}]", "has a shift outside -100..1000 ppm or not a finite number");
+            }
+        }
+    }
+
+    private void CheckSizes(EntrySubmission submission)
+    {
+        if (submission.EntryId.Length > limits.MaxEntryIdLength)
+        {
+            throw new EntryInputException("entry_id", $"is {submission.EntryId.Length} characters; the limit is {limits.MaxEntryIdLength}");
+        }
+
+        if (submission.Structure is { } structure)
+        {
+            if (string.IsNullOrWhiteSpace(structure.Text))
+            {
+                throw new EntryInputException(StructureField(structure), "is empty; expected a structure");
+            }
+
+            if (structure.Text.Length > limits.MaxStructureLength)
+            {
+                throw new EntryInputException(StructureField(structure), $"is {structure.Text.Length} characters; the limit is {limits.MaxStructureLength}");
+            }
+        }
+
+        if (submission.Spectra.Count + submission.ReportedText.Count > limits.MaxSpectra)
+        {
+            throw new EntryInputException("spectra", $"the entry has more than {limits.MaxSpectra} spectra or text blocks");
+        }
+
+        for (var i = 0; i < submission.ReportedText.Count; i++)
+        {
+            CheckLength(submission.ReportedText[i], $"reported_text[{i}]");
+        }
+    }
+
+    private void CheckLength(string text, string field)
+    {
+        if (text.Length > limits.MaxTextLength)
+        {
+            throw new EntryInputException(field, $"is {text.Length} characters; the limit is {limits.MaxTextLength}");
+        }
+    }
+
+    internal static string StructureField(StructureSource structure) =>
+        structure.Format == StructureFormat.Smiles ? "structure.smiles" : "structure.molfile";
+}

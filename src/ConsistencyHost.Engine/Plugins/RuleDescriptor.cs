@@ -1,0 +1,34 @@
+using ConsistencyHost.Sdk.Rules;
+
+namespace ConsistencyHost.Engine.Plugins;
+
+/// <summary>A rule as the host knows it: metadata, where it came from, and whether it can run.</summary>
+public sealed record RuleDescriptor
+{
+    /// <summary>Rule id from its metadata (or the plugin name when the plugin could not be read).</summary>
+    public required string Id { get; init; }
+
+    /// <summary>Rule version.</summary>
+    public string Version { get; init; } = "";
+
+    /// <summary>Rule title.</summary>
+    public string Title { get; init; } = "";
+
+    /// <summary>Nuclei the rule needs.</summary>
+    public IReadOnlyList<string> Nuclei { get; init; } = [];
+
+    /// <summary>File name of the plugin assembly.</summary>
+    public required string Plugin { get; init; }
+
+    /// <summary>True when the rule can run.</summary>
+    public bool IsLoaded => Factory is not null;
+
+    /// <summary>Why the plugin or rule was refused; empty when loaded.</summary>
+    public string LoadMessage { get; init; } = "";
+
+    /// <summary>Creates a rule instance; null when refused.</summary>
+    public Func<IRule>? Factory { get; init; }
+
+    /// <summary>The rule's options type; null when refused.</summary>
+    public Type? OptionsType { get; init; }
+}

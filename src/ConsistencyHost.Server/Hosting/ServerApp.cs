@@ -1,0 +1,114 @@
+using System.Globalization;
+using System.Net;
+using ConsistencyHost.Engine;
+using ConsistencyHost.Engine.Profiles;
+using ConsistencyHost.Server.Services;
+using Microsoft.AspNetCore.Builder;
+using Microsoft.AspNetCore.Hosting;
+using Microsoft.AspNetCore.Hosting.Server;
+using Microsoft.AspNetCore.Hosting.Server.Features;
+using Microsoft.AspNetCore.Server.Kestrel.Core;
+using Microsoft.Extensions.Configuration;
+using Microsoft.Extensions.DependencyInjection;
+using Microsoft.Extensions.Diagnostics.HealthChecks;
+
+namespace ConsistencyHost.Server.Hosting;
+
+/// <summary>
+/// Builds the gRPC host: generic host + Kestrel (HTTP/2 only), the check service, health and reflection.
+/// The engine (plugins and profiles) is built before the host listens, so a bad profile stops start-up.
+/// </summary>
+public static class ServerApp
+{
+    /// <summary>The default plugin folder: "plugins" beside the executable.</summary>
+    public static string DefaultPluginsPath => Path.Combine(AppContext.BaseDirectory, "plugins");
+
+    /// <summary>Builds the application; throws <see cref="ProfileConfigurationException"/> on bad configuration.</summary>
+    public static WebApplication Build(ServerLaunch launch)
+    {
+        var builder = WebApplication.CreateBuilder(new WebApplicationOptions
+        {
+            Args = [.. launch.Args],
+            ContentRootPath = AppContext.BaseDirectory,
+        });
+        AddOverrides(builder.Configuration, launch);
+
+        var engine = new CheckEngine(EngineConfiguration.Read(builder.Configuration.GetSection("ConsistencyHost"), DefaultPluginsPath));
+        var server = ReadServerOptions(builder.Configuration.GetSection("Server"));
+        ConfigureKestrel(builder.WebHost, server);
+
+        builder.Services.AddSingleton(engine);
+        builder.Services.AddGrpc(options =>
+        {
+            options.MaxReceiveMessageSize = server.MaxReceiveMessageBytes;
+            options.MaxSendMessageSize = server.MaxSendMessageBytes;
+            options.EnableDetailedErrors = false;
+            options.Interceptors.Add<InputErrorInterceptor>();
+        });
+        builder.Services.AddGrpcReflection();
+        builder.Services.AddGrpcHealthChecks().AddCheck("plugins", () => PluginHealth(engine));
+
+        var app = builder.Build();
+        app.MapGrpcService<EntryCheckService>();
+        app.MapGrpcHealthChecksService();
+        app.MapGrpcReflectionService();
+        return app;
+    }
+
+    /// <summary>The addresses the started host actually listens on (resolves port 0).</summary>
+    public static IReadOnlyList<string> ListeningAddresses(WebApplication app) =>
+        [.. app.Services.GetRequiredService<IServer>().Features.Get<IServerAddressesFeature>()?.Addresses ?? []];
+
+    private static void AddOverrides(ConfigurationManager configuration, ServerLaunch launch)
+    {
+        if (launch.ConfigFile is not null)
+        {
+            configuration.AddJsonFile(Path.GetFullPath(launch.ConfigFile), optional: false, reloadOnChange: false);
+        }
+
+        var overrides = new Dictionary<string, string?>();
+        if (launch.PluginsPath is not null) overrides["ConsistencyHost:PluginsPath"] = Path.GetFullPath(launch.PluginsPath);
+        if (launch.Port is { } port) overrides["Server:Port"] = port.ToString(CultureInfo.InvariantCulture);
+        configuration.AddInMemoryCollection(overrides);
+    }
+
+    private static ServerOptions ReadServerOptions(IConfigurationSection section)
+    {
+        var defaults = new ServerOptions();
+        return new ServerOptions
+        {
+            Port = section.GetValue("Port", defaults.Port),
+            BindAddress = section.GetValue("BindAddress", defaults.BindAddress) ?? defaults.BindAddress,
+            MaxReceiveMessageBytes = section.GetValue("MaxReceiveMessageBytes", defaults.MaxReceiveMessageBytes),
+            MaxSendMessageBytes = section.GetValue("MaxSendMessageBytes", defaults.MaxSendMessageBytes),
+        };
+    }
+
+    private static void ConfigureKestrel(IWebHostBuilder webHost, ServerOptions server)
+    {
+        if (!IPAddress.TryParse(server.BindAddress, out var address))
+        {
+            throw new ProfileConfigurationException([$"Server:BindAddress: '{server.BindAddress}' is not an IP address"]);
+        }
+
+        if (!IPAddress.IsLoopback(address))
+        {
+            // Beyond loopback the host needs TLS and client authentication, which this version does not
+            // configure yet; refusing is safer than serving unauthenticated on a network.
+            throw new ProfileConfigurationException([$"Server:BindAddress: '{server.BindAddress}' is not a loopback address; this version serves on loopback only"]);
+        }
+
+        webHost.ConfigureKestrel(kestrel =>
+        {
+            kestrel.Listen(address, server.Port, listen => listen.Protocols = HttpProtocols.Http2);
+        });
+    }
+
+    private static HealthCheckResult PluginHealth(CheckEngine engine)
+    {
+        var refused = engine.Rules.Count(r => !r.IsLoaded);
+        return refused == 0
+            ? HealthCheckResult.Healthy($"{engine.Rules.Count} rules loaded")
+            : HealthCheckResult.Degraded($"{refused} of {engine.Rules.Count} rules refused");
+    }
+}

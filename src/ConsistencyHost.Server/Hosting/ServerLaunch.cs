@@ -1,0 +1,17 @@
+namespace ConsistencyHost.Server.Hosting;
+
+/// <summary>What the command line hands the host at start: raw arguments plus explicit overrides.</summary>
+public sealed record ServerLaunch
+{
+    /// <summary>Arguments passed through to configuration (e.g. --Server:Port=5200).</summary>
+    public IReadOnlyList<string> Args { get; init; } = [];
+
+    /// <summary>An extra JSON configuration file (profiles, limits); null for none.</summary>
+    public string? ConfigFile { get; init; }
+
+    /// <summary>Plugin folder override; null keeps configuration or the default beside the executable.</summary>
+    public string? PluginsPath { get; init; }
+
+    /// <summary>Port override; null keeps configuration.</summary>
+    public int? Port { get; init; }
+}

@@ -1,0 +1,22 @@
+using System.Net;
+
+namespace ConsistencyHost.Server.Hosting;
+
+/// <summary>Transport settings, from the "Server" configuration section.</summary>
+public sealed record ServerOptions
+{
+    /// <summary>The port the host listens on; 0 picks a free one (tests).</summary>
+    public int Port { get; init; } = 5151;
+
+    /// <summary>The address to bind; loopback by default so nothing outside the machine can call in.</summary>
+    public string BindAddress { get; init; } = IPAddress.Loopback.ToString();
+
+    /// <summary>
+    /// Largest request accepted, bytes. 4 MiB holds a molfile of thousands of atoms plus long peak lists;
+    /// a larger request is RESOURCE_EXHAUSTED before it is read.
+    /// </summary>
+    public int MaxReceiveMessageBytes { get; init; } = 4 * 1024 * 1024;
+
+    /// <summary>Largest reply sent, bytes.</summary>
+    public int MaxSendMessageBytes { get; init; } = 16 * 1024 * 1024;
+}

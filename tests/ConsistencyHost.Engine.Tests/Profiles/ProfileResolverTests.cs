@@ -1,0 +1,84 @@
+using ConsistencyHost.Engine.Profiles;
+using ConsistencyHost.Sdk.Findings;
+using ConsistencyHost.Tests.Shared;
+
+namespace ConsistencyHost.Engine.Tests.Profiles;
+
+public sealed class ProfileResolverTests
+{
+    [Fact]
+    public void Construct_ProfileNamingUnknownRule_StopsWithEveryProblemListed()
+    {
+        using var folder = PluginFolder.With("ConsistencyHost.Rules.SpectrumMetadata");
+        var options = new EngineOptions
+        {
+            PluginsPath = folder.Path,
+            Profiles =
+            [
+                new Profile
+                {
+                    Name = "publication",
+                    Rules = new Dictionary<string, RuleSettings>
+                    {
+                        ["no-such-rule"] = new(),
+                        ["spectrum-metadata"] = new() { Options = new Dictionary<string, string> { ["FrequencyTolerance"] = "7", ["Colour"] = "red" } },
+                    },
+                },
+            ],
+        };
+
+        var error = Assert.Throws<ProfileConfigurationException>(() => new CheckEngine(options));
+
+        Assert.Contains(error.Problems, p => p.Contains("unknown rule id 'no-such-rule'", StringComparison.Ordinal));
+        Assert.Contains(error.Problems, p => p.Contains("has no option 'Colour'", StringComparison.Ordinal) && p.Contains("FrequencyTolerance", StringComparison.Ordinal));
+        Assert.Contains(error.Problems, p => p.Contains("FrequencyTolerance", StringComparison.Ordinal) && p.Contains("between", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Construct_OptionOfWrongType_NamesOptionAndExpectedType()
+    {
+        using var folder = PluginFolder.With("ConsistencyHost.Rules.SpectrumMetadata");
+        var options = new EngineOptions
+        {
+            PluginsPath = folder.Path,
+            Profiles = [new Profile { Name = "default", Rules = new Dictionary<string, RuleSettings> { ["spectrum-metadata"] = new() { Options = new Dictionary<string, string> { ["RequireSolvent"] = "sometimes" } } } }],
+        };
+
+        var error = Assert.Throws<ProfileConfigurationException>(() => new CheckEngine(options));
+
+        Assert.Contains("option 'RequireSolvent' expects a value of type Boolean but got 'sometimes'", error.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Check_SeverityOverrideInProfile_ChangesFindingSeverity()
+    {
+        using var folder = PluginFolder.With("ConsistencyHost.Rules.SpectrumMetadata");
+        var strict = new Profile
+        {
+            Name = "strict",
+            Rules = new Dictionary<string, RuleSettings> { ["spectrum-metadata"] = new() { Severities = new Dictionary<string, Severity> { ["solvent-not-stated"] = Severity.Error } } },
+        };
+        var engine = new CheckEngine(new EngineOptions { PluginsPath = folder.Path, Profiles = [strict] });
+        var entry = EngineTestKit.Entry(EngineTestKit.ProtonSpectrum(solvent: null));
+
+        var relaxed = engine.Check(entry);
+        var severe = engine.Check(entry with { Profile = "strict" });
+
+        Assert.Equal(Severity.Warning, Assert.Single(relaxed.Findings).Finding.Severity);
+        Assert.Equal(Severity.Error, Assert.Single(severe.Findings).Finding.Severity);
+        Assert.Equal("strict", severe.Profile);
+    }
+
+    [Fact]
+    public void Check_RuleDisabledInProfile_DoesNotRun()
+    {
+        using var folder = PluginFolder.With("ConsistencyHost.Rules.SpectrumMetadata");
+        var quiet = new Profile { Name = "quiet", Rules = new Dictionary<string, RuleSettings> { ["spectrum-metadata"] = new() { Enabled = false } } };
+        var engine = new CheckEngine(new EngineOptions { PluginsPath = folder.Path, Profiles = [quiet] });
+
+        var report = engine.Check(EngineTestKit.Entry(EngineTestKit.ProtonSpectrum(solvent: null)) with { Profile = "quiet" });
+
+        Assert.Empty(report.RuleRuns);
+        Assert.Empty(report.Findings);
+    }
+}

@@ -1,0 +1,26 @@
+namespace ConsistencyHost.Tests.Shared;
+
+/// <summary>Locates the repository and the plugin folders the build drops, from a test's output folder.</summary>
+internal static class RepoPaths
+{
+    public static string Root { get; } = FindRoot();
+
+    /// <summary>The built-in plugins, one sub-folder each.</summary>
+    public static string BuiltInPlugins => Path.Combine(Root, "artifacts", "plugins");
+
+    /// <summary>The hostile and broken fixture plugins.</summary>
+    public static string FixturePlugins => Path.Combine(Root, "artifacts", "test-plugins");
+
+    public static string Samples => Path.Combine(Root, "samples");
+
+    private static string FindRoot()
+    {
+        var directory = new DirectoryInfo(AppContext.BaseDirectory);
+        while (directory is not null && !File.Exists(Path.Combine(directory.FullName, "ConsistencyHost.sln")))
+        {
+            directory = directory.Parent;
+        }
+
+        return directory?.FullName ?? throw new InvalidOperationException("ConsistencyHost.sln not found above " + AppContext.BaseDirectory);
+    }
+}
