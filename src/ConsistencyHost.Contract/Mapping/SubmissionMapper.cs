@@ -29,9 +29,9 @@ public static class SubmissionMapper
     private static SpectrumSubmission ToSpectrum(SpectrumInput input) => new()
     {
         Nucleus = input.Nucleus,
-        FrequencyMHz = input.HasFrequencyMhz ? input.FrequencyMhz : null,
+        FrequencyMHz = input.FrequencyMhz,
         Solvent = input.Solvent,
-        TemperatureK = input.HasTemperatureK ? input.TemperatureK : null,
+        TemperatureK = input.TemperatureK,
         Signals = input.DataCase == SpectrumInput.DataOneofCase.Peaks ? [.. input.Peaks.Peaks.Select(ToSignal)] : null,
         ReportedText = input.DataCase == SpectrumInput.DataOneofCase.ReportedText ? input.ReportedText : null,
         JcampDx = input.DataCase == SpectrumInput.DataOneofCase.JcampDx ? input.JcampDx : null,
@@ -39,14 +39,14 @@ public static class SubmissionMapper
 
     private static Signal ToSignal(Peak peak) => new()
     {
-        ShiftPpm = peak.HasShiftPpm ? peak.ShiftPpm : null,
-        RangeLowPpm = peak.HasRangeLowPpm ? peak.RangeLowPpm : null,
-        RangeHighPpm = peak.HasRangeHighPpm ? peak.RangeHighPpm : null,
+        ShiftPpm = peak.ShiftPpm,
+        RangeLowPpm = peak.RangeLowPpm,
+        RangeHighPpm = peak.RangeHighPpm,
         Multiplicity = peak.Multiplicity,
         Couplings = [.. peak.CouplingsHz.Select(hz => new Coupling(hz))],
-        ProtonCount = peak.HasProtonCount ? peak.ProtonCount : null,
-        Integral = peak.HasIntegral ? peak.Integral : null,
-        CarbonCount = peak.HasCarbonCount ? peak.CarbonCount : null,
+        ProtonCount = peak.ProtonCount,
+        Integral = peak.Integral,
+        CarbonCount = peak.CarbonCount,
         Notes = [.. peak.Notes],
         Assignments = [.. peak.Assignments],
     };

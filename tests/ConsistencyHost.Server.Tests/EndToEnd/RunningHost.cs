@@ -1,0 +1,47 @@
+using ConsistencyHost.Server.Hosting;
+using ConsistencyHost.Tests.Shared;
+using Grpc.Net.Client;
+using Microsoft.AspNetCore.Builder;
+
+namespace ConsistencyHost.Server.Tests.EndToEnd;
+
+/// <summary>
+/// The real host started on a free loopback port with a plugin folder of the test's choosing, and a
+/// channel to it. Stopped and cleaned up on dispose.
+/// </summary>
+internal sealed class RunningHost : IAsyncDisposable
+{
+    private readonly WebApplication _app;
+    private readonly PluginFolder _plugins;
+
+    private RunningHost(WebApplication app, PluginFolder plugins, Uri address)
+    {
+        _app = app;
+        _plugins = plugins;
+        Address = address;
+        Channel = GrpcChannel.ForAddress(address);
+    }
+
+    public Uri Address { get; }
+
+    public GrpcChannel Channel { get; }
+
+    public int Port => Address.Port;
+
+    public static async Task<RunningHost> StartAsync(string[] plugins, string? configFile = null)
+    {
+        var folder = PluginFolder.With(plugins);
+        var app = ServerApp.Build(new ServerLaunch { PluginsPath = folder.Path, Port = 0, ConfigFile = configFile });
+        await app.StartAsync().WaitAsync(TimeSpan.FromSeconds(60));
+        var address = new Uri(ServerApp.ListeningAddresses(app).Single());
+        return new RunningHost(app, folder, address);
+    }
+
+    public async ValueTask DisposeAsync()
+    {
+        Channel.Dispose();
+        await _app.StopAsync().WaitAsync(TimeSpan.FromSeconds(60));
+        await _app.DisposeAsync();
+        _plugins.Dispose();
+    }
+}
