@@ -1,0 +1,170 @@
+namespace ConsistencyHost.Spectra.Analysis.Assignment;
+
+/// <summary>The branch-and-bound state of one <see cref="AssignmentSolver.Solve"/> call.</summary>
+internal sealed class AssignmentSearch
+{
+    private readonly IReadOnlyList<ClassInput> _classes;
+    private readonly IReadOnlyList<SignalInput> _signals;
+    private readonly AssignmentOptions _options;
+    private readonly int[] _order;          // class indices, largest first
+    private readonly int[] _choice;         // per class: signal index, or Missing
+    private readonly int[] _filled;         // per signal: protons assigned so far
+    private readonly int[] _members;        // per signal: number of classes assigned
+    private readonly double[] _pattern;     // per signal: worst pattern cost among its classes
+    private readonly int[] _remainingAfter; // protons of classes at order positions >= i
+    private int[]? _bestChoice;
+    private double _bestCost = double.PositiveInfinity;
+    private long _nodes;
+
+    private int Missing => _signals.Count;
+
+    public AssignmentSearch(IReadOnlyList<ClassInput> classes, IReadOnlyList<SignalInput> signals, AssignmentOptions options)
+    {
+        _classes = classes;
+        _signals = signals;
+        _options = options;
+        _order = [.. Enumerable.Range(0, classes.Count).OrderByDescending(i => classes[i].Size).ThenBy(i => i)];
+        _choice = new int[classes.Count];
+        _filled = new int[signals.Count];
+        _members = new int[signals.Count];
+        _pattern = new double[signals.Count];
+        _remainingAfter = new int[classes.Count + 1];
+        for (var i = classes.Count - 1; i >= 0; i--)
+        {
+            _remainingAfter[i] = _remainingAfter[i + 1] + classes[_order[i]].Size;
+        }
+    }
+
+    public AssignmentResult Run()
+    {
+        Visit(0, 0);
+        return Result();
+    }
+
+    private void Visit(int position, double costSoFar)
+    {
+        if (++_nodes > _options.NodeBudget || costSoFar + LowerBound(position) >= _bestCost)
+        {
+            return;
+        }
+
+        if (position == _order.Length)
+        {
+            _bestCost = costSoFar + Underflow();
+            _bestChoice = (int[])_choice.Clone();
+            return;
+        }
+
+        var current = _order[position];
+        foreach (var signal in Candidates(position))
+        {
+            _choice[current] = signal;
+            if (signal == Missing)
+            {
+                Visit(position + 1, costSoFar + MissingCost(current));
+                continue;
+            }
+
+            var savedPattern = _pattern[signal];
+            var step = Place(current, signal);
+            Visit(position + 1, costSoFar + step);
+            Unplace(current, signal, savedPattern);
+        }
+    }
+
+    /// <summary>Signals worth trying for the class at <paramref name="position"/>, most promising first.</summary>
+    private IEnumerable<int> Candidates(int position)
+    {
+        var current = _order[position];
+        var size = _classes[current].Size;
+        var floor = position > 0 && SameKind(_order[position - 1], current) ? _choice[_order[position - 1]] : 0;
+        var fitting = new List<int>();
+        var overflowing = new List<int>();
+        for (var s = floor; s < _signals.Count; s++)
+        {
+            if (_members[s] == 0 && HasIdenticalEarlierEmpty(s, floor)) continue;
+            (_filled[s] + size <= _signals[s].ProtonCount ? fitting : overflowing).Add(s);
+        }
+
+        fitting.Sort((a, b) => PatternCost.Of(_classes[current], _signals[a], _options).CompareTo(PatternCost.Of(_classes[current], _signals[b], _options)));
+        foreach (var s in fitting) yield return s;
+        yield return Missing;
+        foreach (var s in overflowing) yield return s;
+    }
+
+    private bool HasIdenticalEarlierEmpty(int signal, int floor)
+    {
+        for (var s = floor; s < signal; s++)
+        {
+            if (_members[s] == 0 && _signals[s] == _signals[signal]) return true;
+        }
+
+        return false;
+    }
+
+    private bool SameKind(int a, int b) => _classes[a] == _classes[b];
+
+    private double MissingCost(int current) => _classes[current].IsExchangeable ? 0 : _options.MissingClassCost;
+
+    /// <summary>Adds a class to a signal and returns the cost it adds (overflow and a worse pattern).</summary>
+    private double Place(int current, int signal)
+    {
+        var before = Overflow(signal) + _pattern[signal];
+        _filled[signal] += _classes[current].Size;
+        _members[signal]++;
+        _pattern[signal] = Math.Max(_pattern[signal], PatternCost.Of(_classes[current], _signals[signal], _options));
+        return Overflow(signal) + _pattern[signal] - before;
+    }
+
+    private void Unplace(int current, int signal, double savedPattern)
+    {
+        _filled[signal] -= _classes[current].Size;
+        _members[signal]--;
+        _pattern[signal] = savedPattern;
+    }
+
+    private double Overflow(int signal) => Math.Max(0, _filled[signal] - _signals[signal].ProtonCount) * _options.CountMismatchCost;
+
+    /// <summary>Protons still missing from signals that remaining classes cannot all supply.</summary>
+    private double LowerBound(int position)
+    {
+        var deficit = 0;
+        for (var s = 0; s < _signals.Count; s++) deficit += Math.Max(0, _signals[s].ProtonCount - _filled[s]);
+        return Math.Max(0, deficit - _remainingAfter[position]) * _options.CountMismatchCost;
+    }
+
+    private double Underflow()
+    {
+        var deficit = 0;
+        for (var s = 0; s < _signals.Count; s++) deficit += Math.Max(0, _signals[s].ProtonCount - _filled[s]);
+        return deficit * _options.CountMismatchCost;
+    }
+
+    private AssignmentResult Result()
+    {
+        var choice = _bestChoice ?? Enumerable.Repeat(Missing, _classes.Count).ToArray();
+        var bySignal = Enumerable.Range(0, _signals.Count).Select(_ => new List<int>()).ToList();
+        var missing = new List<int>();
+        for (var c = 0; c < choice.Length; c++)
+        {
+            if (choice[c] == Missing) missing.Add(c);
+            else bySignal[choice[c]].Add(c);
+        }
+
+        var cost = _bestChoice is null ? double.PositiveInfinity : _bestCost;
+        var consistent = _bestChoice is not null && IsConsistent(bySignal, missing);
+        return new AssignmentResult([.. bySignal.Select(l => (IReadOnlyList<int>)l)], missing, cost, consistent, _nodes <= _options.NodeBudget);
+    }
+
+    private bool IsConsistent(List<List<int>> bySignal, List<int> missing)
+    {
+        if (missing.Any(c => !_classes[c].IsExchangeable)) return false;
+        for (var s = 0; s < bySignal.Count; s++)
+        {
+            if (bySignal[s].Sum(c => _classes[c].Size) != _signals[s].ProtonCount) return false;
+            if (bySignal[s].Any(c => PatternCost.Of(_classes[c], _signals[s], _options) >= _options.ImpossiblePatternCost)) return false;
+        }
+
+        return true;
+    }
+}

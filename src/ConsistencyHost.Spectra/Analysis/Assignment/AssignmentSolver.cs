@@ -1,0 +1,20 @@
+namespace ConsistencyHost.Spectra.Analysis.Assignment;
+
+/// <summary>
+/// Finds the best assignment of hydrogen classes to reported 1H signals: every signal's proton count made
+/// by the sizes of its classes, patterns that fit the classes' neighbours, exchangeable classes free to be
+/// absent. Exact branch and bound over classes (largest first) with symmetry breaking between identical
+/// classes and identical empty signals; instances from real entries (≤ ~40 classes) finish far inside the
+/// node budget. When the budget runs out the best assignment so far is returned, marked not exhaustive.
+/// </summary>
+public static class AssignmentSolver
+{
+    /// <summary>Solves one instance.</summary>
+    public static AssignmentResult Solve(IReadOnlyList<ClassInput> classes, IReadOnlyList<SignalInput> signals, AssignmentOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(classes);
+        ArgumentNullException.ThrowIfNull(signals);
+        var search = new AssignmentSearch(classes, signals, options ?? AssignmentOptions.Default);
+        return search.Run();
+    }
+}
