@@ -1,6 +1,5 @@
 using System.Collections.Immutable;
 using ConsistencyHost.Chemistry.Model;
-using ConsistencyHost.Chemistry.Perception.Rings;
 
 namespace ConsistencyHost.Chemistry.Perception.Symmetry;
 
@@ -11,7 +10,7 @@ namespace ConsistencyHost.Chemistry.Perception.Symmetry;
 /// Vertex colours: element, isotope, charge, H count, degree, radical; edge colours: perceived-aromatic or order.</remarks>
 public sealed class ConstitutionalClasses
 {
-    private ConstitutionalClasses(int[] orbit, bool exact)
+    internal ConstitutionalClasses(int[] orbit, bool exact)
     {
         OrbitOf = [.. orbit];
         Classes = SymmetryClassLists.FromOrbitIds(orbit);
