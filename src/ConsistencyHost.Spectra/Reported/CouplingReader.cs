@@ -75,9 +75,10 @@ internal static class CouplingReader
         while (true)
         {
             c.SkipSpaces();
+            var at = c.Pos;
             if (!c.TryNumber(decimalComma, out var value, out _) || value < 0)
             {
-                sink.Add(item.Offset + c.Pos, Fragment(item, c.Pos), ReportedTextMessages.ExpectedCouplingValue);
+                sink.Add(item.Offset + at, Fragment(item, at), ReportedTextMessages.ExpectedCouplingValue);
                 return;
             }
             values.Add(value);

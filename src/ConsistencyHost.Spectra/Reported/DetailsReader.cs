@@ -21,7 +21,7 @@ internal static class DetailsReader
         var text = item.Text;
         if (text.Length == 0)
         {
-            sink.Add(item.Offset, "", ReportedTextMessages.ExpectedDetail);
+            sink.Add(item.Offset, ",", ReportedTextMessages.ExpectedDetail);
             return false;
         }
         if (CouplingReader.LooksLikeJ(text))

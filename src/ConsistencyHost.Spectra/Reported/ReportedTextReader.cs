@@ -53,7 +53,10 @@ public static class ReportedTextReader
                 if (HrmsReader.Read(c, sink) is { } claim) hrms.Add(claim);
             }
             else if (HeaderReader.IsAt(c))
-                spectra.Add(SignalListReader.Read(c, HeaderReader.Read(c, sink), sink, options));
+            {
+                var before = sink.Count;
+                spectra.Add(SignalListReader.Read(c, HeaderReader.Read(c, sink), sink, options, before));
+            }
             else
                 SkipUnknown(c, sink);
         }

@@ -5,11 +5,11 @@ namespace ConsistencyHost.Spectra.Reported;
 /// <summary>Reads the signal list after a header, up to a closing '.', the next header or the end.</summary>
 internal static class SignalListReader
 {
-    public static Spectrum Read(TextCursor c, SpectrumHeader header, ProblemSink sink, ReportedTextOptions options)
+    // problemsBefore: the problem count before the header, because a broken header already explains an empty list.
+    public static Spectrum Read(TextCursor c, SpectrumHeader header, ProblemSink sink, ReportedTextOptions options, int problemsBefore)
     {
         var decimalComma = UsesDecimalComma(c);
         var signals = new List<Signal>();
-        var problemsBefore = sink.Count;
         while (true)
         {
             c.SkipSpaces();

@@ -29,7 +29,8 @@ internal static class SignalReader
             sink.Add(c.Pos, c.Fragment(c.Pos), ReportedTextMessages.ExpectedShift);
             return false;
         }
-        if (!decimalComma && decimals == 0 && c.Current == ',' && TextCursor.IsDigit(c.PeekAt(1)))
+        var mixed = decimalComma && c.Text.AsSpan(draft.Offset, c.Pos - draft.Offset).Contains('.');
+        if (mixed || (!decimalComma && decimals == 0 && c.Current == ',' && TextCursor.IsDigit(c.PeekAt(1))))
         {
             sink.Add(draft.Offset, c.Fragment(draft.Offset), ReportedTextMessages.ExpectedUnambiguousDecimal);
             return false;
