@@ -15,6 +15,7 @@ internal static class MultiplicityText
     public static Multiplicity Parse(string text)
     {
         var reported = text.Trim();
+        if (reported.Length > 0 && !reported.Contains(' ')) return ReadCoreOrModifier(reported);
         var flags = MultiplicityFlags.None;
         var words = reported.Split(' ', StringSplitOptions.RemoveEmptyEntries);
         var core = new List<string>();
@@ -27,6 +28,10 @@ internal static class MultiplicityText
         if (core.Count == 0) return Unrecognised(reported);
         return ReadCore(reported, string.Join(' ', core), flags);
     }
+
+    /// <summary>Fast path for one word (most multiplicities): a lone modifier ("br") is not a multiplicity.</summary>
+    private static Multiplicity ReadCoreOrModifier(string word) =>
+        ModifierOf(word) != MultiplicityFlags.None ? Unrecognised(word) : ReadCore(word, word, MultiplicityFlags.None);
 
     private static MultiplicityFlags ModifierOf(string word) => word.ToLowerInvariant() switch
     {

@@ -8,6 +8,7 @@ internal static class Assignments
 {
     public static bool IsAssignment(string text)
     {
+        if (!text.Contains(" and ") && !text.Contains(" & ") && !text.Contains(" + ")) return IsLabel(text);
         var parts = text.Split([" and ", " & ", " + "], StringSplitOptions.None);
         return parts.All(IsLabel);
     }

@@ -61,9 +61,9 @@ internal static class HeaderReader
         decoupled = null;
         var i = c.Pos;
         var t = c.Text;
-        var mass = "";
-        while (i < t.Length && (TextCursor.IsDigit(t[i]) || IsSuperscriptDigit(t[i]))) mass += Normal(t[i++]);
-        if (i >= t.Length || mass.Length == 0) return false;
+        while (i < t.Length && (TextCursor.IsDigit(t[i]) || IsSuperscriptDigit(t[i]))) i++;
+        if (i >= t.Length || i == c.Pos || t[i] is not ('H' or 'C' or 'F' or 'P')) return false;
+        var mass = string.Concat(t[c.Pos..i].Select(Normal));
         nucleus = NucleusNames.Parse(mass + t[i]);
         if (nucleus == Nucleus.Unknown || NucleusNames.ToLabel(nucleus) != mass + t[i]) return false;
         i++;

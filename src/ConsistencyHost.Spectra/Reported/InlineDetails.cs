@@ -9,7 +9,7 @@ internal static class InlineDetails
     /// <summary>Reads inline items into the draft when the text after the comma at the cursor is a multiplicity.</summary>
     public static void TryRead(TextCursor c, SignalDraft draft, bool decimalComma, ProblemSink sink)
     {
-        if (draft.HasDetails || c.Current != ',') return;
+        if (draft.HasDetails || c.Current != ',' || !LetterFollows(c)) return;
         var items = new List<DetailItem>();
         while (c.Current == ',' && NextItem(c, items.Count == 0) is { } item)
         {
@@ -20,6 +20,14 @@ internal static class InlineDetails
         if (items.Count == 0) return;
         draft.HasDetails = true;
         DetailsReader.Read(items, draft, decimalComma, sink);
+    }
+
+    /// <summary>Cheap first test: inline details start with a letter ("d (8.5)", "m", "br s"), never a digit.</summary>
+    private static bool LetterFollows(TextCursor c)
+    {
+        var i = c.Pos + 1;
+        while (i < c.Text.Length && TextCursor.IsSpace(c.Text[i])) i++;
+        return i < c.Text.Length && char.IsLetter(c.Text[i]);
     }
 
     private static DetailItem? NextItem(TextCursor c, bool first)

@@ -61,11 +61,37 @@ internal sealed class TextCursor(string text)
             while (i < Text.Length && IsDigit(Text[i])) i++;
             decimals = i - intEnd - 1;
         }
-        var body = Text.AsSpan(digitsStart, i - digitsStart).ToString().Replace(',', '.');
-        value = double.Parse(body, NumberStyles.AllowDecimalPoint, CultureInfo.InvariantCulture);
+        value = Decimal(Text.AsSpan(digitsStart, i - digitsStart));
         if (negative) value = -value;
         Pos = i;
         return i > start;
+    }
+
+    private static readonly double[] PowersOfTen = [1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15];
+
+    /// <summary>
+    /// Digits with at most one '.' or ',' as a double. Up to 15 significant digits this is one correctly rounded
+    /// division of two exact doubles, so it equals double.Parse; longer numbers fall back to double.Parse.
+    /// </summary>
+    private static double Decimal(ReadOnlySpan<char> digits)
+    {
+        long mantissa = 0;
+        var decimals = 0;
+        var significant = 0;
+        var seenPoint = false;
+        foreach (var ch in digits)
+        {
+            if (ch is '.' or ',')
+            {
+                seenPoint = true;
+                continue;
+            }
+            mantissa = mantissa * 10 + (ch - '0');
+            if (mantissa > 0) significant++;
+            if (seenPoint) decimals++;
+        }
+        if (significant <= 15 && decimals < PowersOfTen.Length) return mantissa / PowersOfTen[decimals];
+        return double.Parse(digits.ToString().Replace(',', '.'), NumberStyles.AllowDecimalPoint, CultureInfo.InvariantCulture);
     }
 
     /// <summary>Up to 30 characters from <paramref name="from"/>, stopping at a line end.</summary>
