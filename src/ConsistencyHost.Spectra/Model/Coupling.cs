@@ -9,6 +9,9 @@ namespace ConsistencyHost.Spectra.Model;
 /// <param name="CoupledNucleus">The other nucleus of a heteronuclear or typed coupling; null when H–H or unstated.</param>
 public sealed record Coupling(double Hz, string? PartnerLabel = null, string? CoupledNucleus = null)
 {
+    /// <summary>Number of bonds when the report states it ("2JHF", "³J"); null otherwise.</summary>
+    public int? BondCount { get; init; }
+
     /// <summary>True when the coupling is to a nucleus other than the observed one.</summary>
     public bool IsHeteronuclear => CoupledNucleus is not null && CoupledNucleus != "H";
 }

@@ -39,6 +39,12 @@ public sealed record Signal
     /// <summary>Where in the source text this signal was read (character offset), when read from text.</summary>
     public int? SourceOffset { get; init; }
 
+    /// <summary>Number of observed nuclei a 19F or 31P signal stands for ("3F"); null when not stated.</summary>
+    public int? NucleusCount { get; init; }
+
+    /// <summary>The multiplicity text read as a pattern (flags, line counts, expected J count).</summary>
+    public Multiplicity MultiplicityPattern => Model.Multiplicity.Parse(Multiplicity);
+
     /// <summary>A representative position: the shift, or the middle of the range.</summary>
     public double CentrePpm => ShiftPpm ?? ((RangeLowPpm ?? 0) + (RangeHighPpm ?? 0)) / 2.0;
 }

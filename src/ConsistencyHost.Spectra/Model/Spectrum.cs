@@ -17,4 +17,10 @@ public sealed record Spectrum
 
     /// <summary>The reported signals in the order given.</summary>
     public IReadOnlyList<Signal> Signals { get; init; } = [];
+
+    /// <summary>Decoupled nucleus when stated ("1H" for 13C{1H}); null otherwise.</summary>
+    public string? Decoupled { get; init; }
+
+    /// <summary>Character offset of the spectrum's header in the source text, when read from text.</summary>
+    public int? SourceOffset { get; init; }
 }

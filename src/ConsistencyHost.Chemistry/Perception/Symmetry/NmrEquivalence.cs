@@ -1,0 +1,85 @@
+using System.Collections.Immutable;
+using ConsistencyHost.Chemistry.Model;
+using ConsistencyHost.Chemistry.Perception.Stereo;
+
+namespace ConsistencyHost.Chemistry.Perception.Symmetry;
+
+/// <summary>Stereo-aware NMR equivalence: hydrogen and carbon classes, exchangeable hydrogens, coupling partners
+/// and the expected signal-count ranges.</summary>
+/// <remarks>
+/// Algorithm A of nmr-methods.md §2.2: automorphisms of the heavy-atom graph (found by the individualisation–
+/// refinement search, McKay 1981) are classified by their action on the stereo parities: all kept → rotation-like,
+/// all tetrahedral inverted and double bonds kept → reflection-like (Mislow &amp; Siegel, J. Am. Chem. Soc. 106,
+/// 3319, 1984). Homotopic and enantiotopic atoms are merged (achiral solvent); diastereotopic ones are not.
+/// The two H of a CH2 are exchanged only by a rotation swapping its two ligands or by a reflection fixing them;
+/// those of =CH2 only by a symmetry swapping the other end's two ligands. Unspecified stereo elements are
+/// enumerated (§2.4) and the counts become ranges. This is the fast-exchange limit of a 2D structure (§2.6).
+/// </remarks>
+public sealed class NmrEquivalence
+{
+    private NmrEquivalence(ImmutableArray<HydrogenClass> hydrogens, ImmutableArray<ImmutableArray<int>> carbons,
+        ConstitutionalClasses constitutional, SignalCountRange h, SignalCountRange c, int configurations)
+    {
+        HydrogenClasses = hydrogens;
+        CarbonClasses13C = carbons;
+        Constitutional = constitutional;
+        Expected1H = h;
+        Expected13C = c;
+        ConfigurationsConsidered = configurations;
+        ExchangeableHydrogens = [.. hydrogens.Select(x => x.IsExchangeable)];
+    }
+
+    /// <summary>Hydrogen classes of the configuration with the most classes, ordered by smallest parent index.</summary>
+    public ImmutableArray<HydrogenClass> HydrogenClasses { get; }
+
+    /// <summary>Per hydrogen class: exchangeable (O–H, N–H, S–H).</summary>
+    public ImmutableArray<bool> ExchangeableHydrogens { get; }
+
+    /// <summary>Carbon classes (stereo-aware), each sorted, ordered by smallest index.</summary>
+    public ImmutableArray<ImmutableArray<int>> CarbonClasses13C { get; }
+
+    /// <summary>The stereo-free constitutional orbits.</summary>
+    public ConstitutionalClasses Constitutional { get; }
+
+    /// <summary>Expected number of 1H signals.</summary>
+    public SignalCountRange Expected1H { get; }
+
+    /// <summary>Expected number of 13C signals.</summary>
+    public SignalCountRange Expected13C { get; }
+
+    /// <summary>Number of relative configurations evaluated (1 when all stereo is specified or absent).</summary>
+    public int ConfigurationsConsidered { get; }
+
+    /// <summary>Computes the classes of a molecule.</summary>
+    public static NmrEquivalence Of(Molecule molecule)
+    {
+        ArgumentNullException.ThrowIfNull(molecule);
+        var ctx = SymmetryContext.Create(molecule);
+        var constitutionalOrbit = OrbitFinder.Orbits(ctx.Search, ctx.Cells, null);
+        var (tetra, doubles) = StereoCandidates.Find(ctx);
+        var stats = new List<ConfigurationStats>();
+        foreach (var (t, d) in StereoEnumeration.Configurations(tetra, doubles))
+        {
+            stats.Add(ConfigurationStats.Of(molecule, ConfigurationSymmetry.Compute(ctx, t, d), constitutionalOrbit));
+        }
+
+        var best = stats.MaxBy(s => s.HydrogenClassCount)!;
+        var hydrogens = CouplingPartners.Attach(molecule, ctx.Aromaticity, HydrogenClassBuilder.Build(molecule, best.Symmetry));
+        var carbons = CarbonClasses(molecule, best.Symmetry.Orbit);
+        var unspecified = StereoEnumeration.UnspecifiedCount(tetra, doubles);
+        var constitutional = new ConstitutionalClasses(constitutionalOrbit, !ctx.Search.BudgetExceeded);
+        return new NmrEquivalence(hydrogens, carbons, constitutional,
+            SignalCountRanges.Hydrogen(stats, unspecified), SignalCountRanges.Carbon(stats, unspecified), stats.Count);
+    }
+
+    private static ImmutableArray<ImmutableArray<int>> CarbonClasses(Molecule m, int[] orbit)
+    {
+        var ids = new int[m.AtomCount];
+        for (var v = 0; v < ids.Length; v++)
+        {
+            ids[v] = m.Atoms[v].AtomicNumber == 6 ? orbit[v] : -1 - v;
+        }
+
+        return [.. SymmetryClassLists.FromOrbitIds(ids).Where(c => m.Atoms[c[0]].AtomicNumber == 6)];
+    }
+}

@@ -1,0 +1,63 @@
+using System.Globalization;
+
+namespace ConsistencyHost.Chemistry.Perception.Symmetry;
+
+/// <summary>Turns per-configuration counts into expected signal-count ranges with reasons (nmr-methods.md §2.7).</summary>
+internal static class SignalCountRanges
+{
+    public static SignalCountRange Hydrogen(List<ConfigurationStats> stats, int unspecified)
+    {
+        var reasons = new List<string>();
+        var max = stats.Max(s => s.HydrogenClassCount);
+        var min = stats.Min(s => s.HydrogenClassCount - s.ExchangeableClasses - s.DiastereotopicPairs - s.DiastereotopicHydrogenGroups);
+        var worst = stats.MaxBy(s => s.HydrogenClassCount)!;
+        if (worst.ExchangeableClasses > 0)
+        {
+            reasons.Add(F($"{worst.ExchangeableClasses} exchangeable H class(es) (O–H, N–H, S–H) may be absent, broadened or merged with the water signal (always absent in D2O, CD3OD)"));
+        }
+
+        if (worst.DiastereotopicPairs > 0)
+        {
+            reasons.Add(F($"{worst.DiastereotopicPairs} diastereotopic CH2/=CH2 proton pair(s) may coincide"));
+        }
+
+        if (worst.DiastereotopicHydrogenGroups > 0)
+        {
+            reasons.Add(F($"{worst.DiastereotopicHydrogenGroups} diastereotopic group(s) (e.g. isopropyl methyls) may coincide"));
+        }
+
+        AddConfigurationReason(reasons, stats, unspecified, s => s.HydrogenClassCount);
+        return new SignalCountRange(Math.Max(min, stats.Count == 0 ? 0 : 1), max, reasons);
+    }
+
+    public static SignalCountRange Carbon(List<ConfigurationStats> stats, int unspecified)
+    {
+        var reasons = new List<string>();
+        var max = stats.Max(s => s.CarbonClassCount);
+        var min = stats.Min(s => s.CarbonClassCount - s.DiastereotopicCarbons);
+        var worst = stats.MaxBy(s => s.CarbonClassCount)!;
+        if (worst.DiastereotopicCarbons > 0)
+        {
+            reasons.Add(F($"{worst.DiastereotopicCarbons} diastereotopic carbon(s) may coincide with their constitutional partner"));
+        }
+
+        AddConfigurationReason(reasons, stats, unspecified, s => s.CarbonClassCount);
+        return new SignalCountRange(Math.Min(min, max), max, reasons);
+    }
+
+    private static void AddConfigurationReason(List<string> reasons, List<ConfigurationStats> stats, int unspecified, Func<ConfigurationStats, int> count)
+    {
+        var lo = stats.Min(count);
+        var hi = stats.Max(count);
+        if (unspecified > StereoEnumeration.MaxEnumerated)
+        {
+            reasons.Add(F($"{unspecified} stereo elements unspecified; range estimated from {stats.Count} sample configurations"));
+        }
+        else if (lo != hi)
+        {
+            reasons.Add(F($"relative configuration of {unspecified} stereo element(s) unspecified: {lo} to {hi} classes over {stats.Count} configurations"));
+        }
+    }
+
+    private static string F(FormattableString s) => s.ToString(CultureInfo.InvariantCulture);
+}

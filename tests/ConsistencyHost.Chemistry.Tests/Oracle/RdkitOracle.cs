@@ -1,0 +1,62 @@
+using System.Diagnostics;
+
+namespace ConsistencyHost.Chemistry.Tests.Oracle;
+
+/// <summary>Runs the committed RDKit script once per test run and parses its output.</summary>
+internal static class RdkitOracle
+{
+    public const string Python = "/usr/bin/python3";
+    public const string Nci5K = "/usr/share/RDKit/Data/NCI/first_5K.smi";
+
+    private static readonly Lazy<(IReadOnlyList<OracleRow> Rows, string? Error)> Cached = new(Run);
+
+    public static (IReadOnlyList<OracleRow> Rows, string? Error) Rows => Cached.Value;
+
+    private static (IReadOnlyList<OracleRow>, string?) Run()
+    {
+        if (!File.Exists(Python) || !File.Exists(Nci5K))
+        {
+            return ([], $"RDKit oracle needs {Python} and {Nci5K}; install python3-rdkit and rdkit-data (Debian).");
+        }
+
+        var script = Path.Combine(AppContext.BaseDirectory, "Oracle", "rdkit_oracle.py");
+        var info = new ProcessStartInfo(Python, [script, Nci5K])
+        {
+            RedirectStandardOutput = true,
+            RedirectStandardError = true,
+            UseShellExecute = false,
+        };
+        using var process = Process.Start(info)!;
+        var stderr = process.StandardError.ReadToEndAsync();
+        var stdout = process.StandardOutput.ReadToEnd();
+        process.WaitForExit();
+        if (process.ExitCode != 0)
+        {
+            return ([], $"RDKit oracle failed (exit {process.ExitCode}); is python3-rdkit installed? {stderr.Result}");
+        }
+
+        var rows = new List<OracleRow>();
+        foreach (var line in stdout.Split('\n', StringSplitOptions.RemoveEmptyEntries))
+        {
+            rows.Add(OracleRow.Parse(line));
+        }
+
+        return (rows, null);
+    }
+}
+
+/// <summary>One line of oracle output.</summary>
+internal sealed record OracleRow(string Name, bool Parsed, string Formula, double ExactMass, int[] Ranks)
+{
+    public static OracleRow Parse(string line)
+    {
+        var f = line.Split('\t');
+        if (f[1] != "OK")
+        {
+            return new OracleRow(f[0], false, string.Empty, 0, []);
+        }
+
+        var ranks = Array.ConvertAll(f[4].Split(','), s => int.Parse(s, System.Globalization.CultureInfo.InvariantCulture));
+        return new OracleRow(f[0], true, f[2], double.Parse(f[3], System.Globalization.CultureInfo.InvariantCulture), ranks);
+    }
+}

@@ -1,5 +1,0 @@
-namespace ConsistencyHost.Chemistry.Tests;
-
-internal static class TestAssemblyMarker
-{
-}

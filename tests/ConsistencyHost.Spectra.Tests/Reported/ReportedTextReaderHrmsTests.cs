@@ -1,0 +1,42 @@
+using ConsistencyHost.Spectra.Model;
+using ConsistencyHost.Spectra.Reported;
+
+namespace ConsistencyHost.Spectra.Tests.Reported;
+
+public sealed class ReportedTextReaderHrmsTests
+{
+    // Source: ACS-style example "HRMS (ESI-TOF) m/z: [M + Na]+ calcd for C12H15NO3Na 244.0944" quoted in the
+    // reference notes §7.3 (a public paraphrase of the ACS guidelines); found value invented for the form.
+    [Fact]
+    public void Read_AcsHrmsLine_GivesClaimWithDecimals()
+    {
+        var result = ReportedTextReader.Read("HRMS (ESI-TOF) m/z: [M + Na]+ calcd for C12H15NO3Na 244.0944; found 244.0941.");
+        Assert.True(result.Succeeded);
+        Assert.Equal(new HrmsClaim("ESI-TOF", "[M+Na]+", "C12H15NO3Na", 244.0944, 244.0941, 4, 4, 0), Assert.Single(result.Hrms));
+    }
+
+    // Common practice: "Calcd for …:", comma before "Found", label after m/z without colon.
+    [Theory]
+    [InlineData("HRMS (ESI) m/z [M+H]+ Calcd for C10H14NO2: 180.1019, Found 180.1016", "ESI", "[M+H]+", "C10H14NO2", 180.1019, 180.1016)]
+    [InlineData("HRMS (ESI) m/z: [M + H]+ calcd for C10H14NO2 180.1019; found 180.1016.", "ESI", "[M+H]+", "C10H14NO2", 180.1019, 180.1016)]
+    [InlineData("HRMS (APCI): m/z calc. for C10H14NO2 [M+H]+ 180.1019, found: 180.1022", "APCI", "[M+H]+", "C10H14NO2", 180.1019, 180.1022)]
+    [InlineData("HRMS (ESI) calculated for C8H11N4O2 [M+H]⁺ 195.0877, found 195.0875.", "ESI", "[M+H]+", "C8H11N4O2", 195.0877, 195.0875)]
+    public void Read_HrmsVariant_GivesClaim(string text, string ionisation, string ion, string formula, double calcd, double found)
+    {
+        var result = ReportedTextReader.Read(text);
+        Assert.True(result.Succeeded, string.Join("; ", result.Problems.Select(p => p.Message)));
+        var claim = Assert.Single(result.Hrms);
+        Assert.Equal((ionisation, ion, formula, calcd, (double?)found), (claim.Ionisation, claim.IonLabel, claim.IonFormula, claim.CalculatedMz, claim.FoundMz));
+    }
+
+    // Source: caffeine [M+H]+ calcd 195.0877 (reference notes §7.3 worked example, 195.087652 rounded).
+    [Fact]
+    public void Read_SpectraThenHrms_KeepsBothWithOffsets()
+    {
+        const string text = "1H NMR (400 MHz, CDCl3) δ 7.51 (s, 1H), 4.00 (s, 3H). HRMS (ESI) m/z: [M + H]+ calcd for C8H11N4O2 195.0877; found 195.0874.";
+        var result = ReportedTextReader.Read(text);
+        Assert.True(result.Succeeded);
+        Assert.Equal(2, Assert.Single(result.Spectra).Signals.Count);
+        Assert.Equal(text.IndexOf("HRMS", StringComparison.Ordinal), Assert.Single(result.Hrms).SourceOffset);
+    }
+}
