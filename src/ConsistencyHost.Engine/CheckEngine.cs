@@ -49,6 +49,9 @@ public sealed class CheckEngine
             Profile = profile.Name,
             Findings = [.. findings.OrderBy(f => f.RuleId, StringComparer.Ordinal)],
             RuleRuns = [.. runs.OrderBy(r => r.RuleId, StringComparer.Ordinal)],
+            Structure = entry.Perception is { } perception
+                ? new StructureSummary(perception.Formula.Hill, perception.Molecule.AtomCount, perception.Formula.MonoisotopicMass)
+                : null,
         };
     }
 

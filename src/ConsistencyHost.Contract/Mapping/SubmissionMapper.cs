@@ -16,8 +16,27 @@ public static class SubmissionMapper
         Spectra = [.. request.Spectra.Select(ToSpectrum)],
         ReportedText = [.. request.ReportedText],
         Formula = request.Claims?.Formula,
+        Hrms = request.Claims is null ? [] : [.. request.Claims.Hrms.Select(ToHrms)],
         Profile = request.Profile,
     };
+
+    private static Spectra.Model.HrmsClaim ToHrms(V1.HrmsClaim claim, int index) => new(
+        Ionisation: claim.Ionisation.Length > 0 ? claim.Ionisation : null,
+        IonLabel: claim.Ion.Length > 0 ? claim.Ion.Replace(" ", "", StringComparison.Ordinal) : null,
+        IonFormula: claim.IonFormula,
+        CalculatedMz: claim.CalculatedMz ?? throw new EntryInputException($"claims.hrms[{index}].calculated_mz", "is required; expected the calculated m/z as reported"),
+        FoundMz: claim.FoundMz,
+        CalculatedDecimals: Decimals(claim.CalculatedMz.Value),
+        FoundDecimals: claim.FoundMz is { } found ? Decimals(found) : 0,
+        SourceOffset: -1);
+
+    /// <summary>Decimal places of the shortest text that round-trips the number (180.1019 → 4).</summary>
+    private static int Decimals(double value)
+    {
+        var text = value.ToString("R", System.Globalization.CultureInfo.InvariantCulture);
+        var dot = text.IndexOf('.', StringComparison.Ordinal);
+        return dot < 0 || text.Contains('E', StringComparison.Ordinal) ? 0 : text.Length - dot - 1;
+    }
 
     private static StructureSource? ToStructure(Structure? structure) => structure?.SourceCase switch
     {

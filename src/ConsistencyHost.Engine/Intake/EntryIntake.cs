@@ -19,17 +19,25 @@ public sealed class EntryIntake(IntakeLimits limits)
             spectra.Add(ReadSpectrum(submission.Spectra[i], $"spectra[{i}]"));
         }
 
+        var hrms = new List<HrmsClaim>(submission.Hrms);
         for (var i = 0; i < submission.ReportedText.Count; i++)
         {
-            spectra.AddRange(ReportedTextIntake.Read(submission.ReportedText[i], $"reported_text[{i}]"));
+            var read = ReportedTextIntake.Read(submission.ReportedText[i], $"reported_text[{i}]");
+            spectra.AddRange(read.Spectra);
+            hrms.AddRange(read.Hrms);
         }
 
         return new Entry
         {
             EntryId = submission.EntryId,
             Structure = submission.Structure,
+            Molecule = submission.Structure is { } structure ? StructureIntake.Read(structure) : null,
             Spectra = spectra,
-            Claims = new EntryClaims { Formula = string.IsNullOrWhiteSpace(submission.Formula) ? null : submission.Formula.Trim() },
+            Claims = new EntryClaims
+            {
+                Formula = string.IsNullOrWhiteSpace(submission.Formula) ? null : submission.Formula.Trim(),
+                Hrms = hrms,
+            },
         };
     }
 

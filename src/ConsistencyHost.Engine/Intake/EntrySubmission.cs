@@ -21,6 +21,9 @@ public sealed record EntrySubmission
     /// <summary>The stated molecular formula; null when none.</summary>
     public string? Formula { get; init; }
 
+    /// <summary>HRMS claims sent structured (claims read from reported text are added by intake).</summary>
+    public IReadOnlyList<HrmsClaim> Hrms { get; init; } = [];
+
     /// <summary>The profile to apply; null or empty for the default.</summary>
     public string? Profile { get; init; }
 }

@@ -1,3 +1,4 @@
+using ConsistencyHost.Chemistry.Model;
 using ConsistencyHost.Spectra.Model;
 
 namespace ConsistencyHost.Sdk.Entries;
@@ -5,11 +6,32 @@ namespace ConsistencyHost.Sdk.Entries;
 /// <summary>An immutable entry, as the host hands it to rules and as the test kit builds it.</summary>
 public sealed record Entry : IEntryView
 {
+    private StructurePerception? _perception;
+
     /// <inheritdoc />
     public required string EntryId { get; init; }
 
     /// <inheritdoc />
     public StructureSource? Structure { get; init; }
+
+    /// <inheritdoc />
+    public Molecule? Molecule { get; init; }
+
+    /// <inheritdoc />
+    /// <remarks>Created on first use for the current <see cref="Molecule"/>; a copy made with <c>with</c> and
+    /// another molecule gets its own.</remarks>
+    public StructurePerception? Perception
+    {
+        get
+        {
+            if (Molecule is null) return null;
+            var current = Volatile.Read(ref _perception);
+            if (current is not null && ReferenceEquals(current.Molecule, Molecule)) return current;
+            var created = new StructurePerception(Molecule);
+            var raced = Interlocked.CompareExchange(ref _perception, created, current);
+            return ReferenceEquals(raced, current) ? created : raced!;
+        }
+    }
 
     /// <inheritdoc />
     public IReadOnlyList<Spectrum> Spectra { get; init; } = [];

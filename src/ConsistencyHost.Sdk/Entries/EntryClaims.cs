@@ -1,3 +1,5 @@
+using ConsistencyHost.Spectra.Model;
+
 namespace ConsistencyHost.Sdk.Entries;
 
 /// <summary>Claims that come with an entry beside its spectra.</summary>
@@ -8,4 +10,7 @@ public sealed record EntryClaims
 
     /// <summary>The molecular formula the entry states; null when none.</summary>
     public string? Formula { get; init; }
+
+    /// <summary>HRMS claims, structured or read from reported text, in entry order.</summary>
+    public IReadOnlyList<HrmsClaim> Hrms { get; init; } = [];
 }

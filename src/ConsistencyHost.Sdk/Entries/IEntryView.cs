@@ -1,3 +1,4 @@
+using ConsistencyHost.Chemistry.Model;
 using ConsistencyHost.Spectra.Model;
 
 namespace ConsistencyHost.Sdk.Entries;
@@ -13,6 +14,12 @@ public interface IEntryView
 
     /// <summary>The claimed structure as submitted; null when the entry has none.</summary>
     StructureSource? Structure { get; }
+
+    /// <summary>The structure as read; null when the entry has none.</summary>
+    Molecule? Molecule { get; }
+
+    /// <summary>Perception of <see cref="Molecule"/> (formula, classes); null when the entry has no structure.</summary>
+    StructurePerception? Perception { get; }
 
     /// <summary>Every spectrum of the entry, in entry order (structured first, then read from text).</summary>
     IReadOnlyList<Spectrum> Spectra { get; }

@@ -1,0 +1,32 @@
+using ConsistencyHost.Chemistry.Model;
+using ConsistencyHost.Chemistry.Perception.Formula;
+using ConsistencyHost.Chemistry.Perception.Symmetry;
+
+namespace ConsistencyHost.Sdk.Entries;
+
+/// <summary>
+/// What the host perceives of an entry's structure, computed once on first use and shared by every rule
+/// of the request (thread-safe). Each part is an immutable result computed from the molecule.
+/// </summary>
+public sealed class StructurePerception
+{
+    private readonly Lazy<MolecularFormula> _formula;
+    private readonly Lazy<NmrEquivalence> _equivalence;
+
+    /// <summary>Starts lazy perception of <paramref name="molecule"/>.</summary>
+    public StructurePerception(Molecule molecule)
+    {
+        Molecule = molecule ?? throw new ArgumentNullException(nameof(molecule));
+        _formula = new Lazy<MolecularFormula>(() => MolecularFormula.Of(molecule), LazyThreadSafetyMode.ExecutionAndPublication);
+        _equivalence = new Lazy<NmrEquivalence>(() => NmrEquivalence.Of(molecule), LazyThreadSafetyMode.ExecutionAndPublication);
+    }
+
+    /// <summary>The molecule perceived.</summary>
+    public Molecule Molecule { get; }
+
+    /// <summary>Formula with charge, monoisotopic and average mass.</summary>
+    public MolecularFormula Formula => _formula.Value;
+
+    /// <summary>Stereo-aware hydrogen and carbon classes, coupling partners and expected signal counts.</summary>
+    public NmrEquivalence Equivalence => _equivalence.Value;
+}
