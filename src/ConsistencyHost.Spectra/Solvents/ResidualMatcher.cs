@@ -1,0 +1,89 @@
+using ConsistencyHost.Spectra.Model;
+
+namespace ConsistencyHost.Spectra.Solvents;
+
+/// <summary>
+/// Finds reported signals that sit on the residual solvent line, on water/HOD, or on a group of a common impurity.
+/// </summary>
+/// <remarks>Tables: Gottlieb et al. 1997; Fulmer et al. 2010 (see <see cref="ResidualSolventTable"/>, <see cref="ImpurityTable"/>).
+/// A range signal matches when the tabulated shift lies inside the range widened by the window.</remarks>
+public sealed class ResidualMatcher(ResidualMatchOptions? options = null)
+{
+    private readonly ResidualMatchOptions options = options ?? ResidualMatchOptions.Default;
+
+    /// <summary>Matches the signals of <paramref name="spectrum"/> using its nucleus and solvent.</summary>
+    public ResidualMatchResult Match(Spectrum spectrum)
+    {
+        ArgumentNullException.ThrowIfNull(spectrum);
+        return Match(spectrum.Nucleus, spectrum.Solvent, spectrum.Signals);
+    }
+
+    /// <summary>Matches <paramref name="signals"/> of a <paramref name="nucleus"/> spectrum in <paramref name="solvent"/>.</summary>
+    public ResidualMatchResult Match(Nucleus nucleus, string? solvent, IReadOnlyList<Signal> signals)
+    {
+        var name = SolventNames.Normalise(solvent);
+        var lines = ResidualSolventTable.For(name, nucleus).ToList();
+        if (name is null || lines.Count == 0) return new ResidualMatchResult { SolventKnown = false };
+        var matches = new List<ResidualMatch>();
+        var evidence = new List<ImpurityEvidence>();
+        for (var i = 0; i < signals.Count; i++) MatchSolventLines(i, signals[i], lines, name, matches);
+        foreach (var impurity in ImpurityTable.All) MatchImpurity(impurity, name, nucleus, signals, matches, evidence);
+        return new ResidualMatchResult
+        {
+            SolventKnown = true,
+            Matches = [.. matches.OrderBy(m => m.SignalIndex)],
+            Impurities = evidence,
+        };
+    }
+
+    private void MatchSolventLines(int index, Signal signal, List<ResidualSolventLine> lines, string solvent, List<ResidualMatch> into)
+    {
+        foreach (var line in lines)
+        {
+            var window = WindowFor(line, solvent);
+            if (Deviation(signal, line.ShiftPpm, window) is not { } deviation) continue;
+            var kind = line.Kind == SolventLineKind.Water ? ResidualMatchKind.Water : ResidualMatchKind.ResidualSolvent;
+            into.Add(new ResidualMatch(index, kind, solvent, line.Species, line.ShiftPpm, deviation, line.Source));
+        }
+    }
+
+    private double WindowFor(ResidualSolventLine line, string solvent)
+    {
+        if (line.Nucleus == Nucleus.C13) return options.CarbonWindowPpm;
+        if (solvent == "D2O") return options.HodInD2OWindowPpm;
+        if (line.Kind == SolventLineKind.Residual) return options.ProtonWindowPpm;
+        return options.WideWaterSolvents.Contains(solvent) ? options.WideWaterWindowPpm : options.WaterWindowPpm;
+    }
+
+    private void MatchImpurity(Impurity impurity, string solvent, Nucleus nucleus, IReadOnlyList<Signal> signals,
+        List<ResidualMatch> into, List<ImpurityEvidence> evidence)
+    {
+        var tabulated = 0;
+        var matched = 0;
+        foreach (var group in impurity.Groups)
+        {
+            var shift = group.Shifts.FirstOrDefault(s => s.Solvent == solvent && s.Nucleus == nucleus);
+            if (shift is null) continue;
+            tabulated++;
+            var window = nucleus == Nucleus.C13 ? options.CarbonWindowPpm : group.Exchangeable ? options.WaterWindowPpm : options.ProtonWindowPpm;
+            var hit = false;
+            for (var i = 0; i < signals.Count; i++)
+            {
+                if (Deviation(signals[i], shift.Ppm, window) is not { } deviation) continue;
+                into.Add(new ResidualMatch(i, ResidualMatchKind.Impurity, impurity.Name, group.Label, shift.Ppm, deviation, shift.Source));
+                hit = true;
+            }
+            if (hit) matched++;
+        }
+        if (matched > 0) evidence.Add(new ImpurityEvidence(impurity, matched, tabulated, matched >= options.MinimumImpurityGroups));
+    }
+
+    /// <summary>Signed deviation when the signal lies within the window of <paramref name="reference"/>; null otherwise.</summary>
+    private static double? Deviation(Signal signal, double reference, double window)
+    {
+        const double Epsilon = 1e-9; // a value exactly on the window edge matches, despite binary rounding
+        if (signal.ShiftPpm is { } x) return Math.Abs(x - reference) <= window + Epsilon ? Math.Round(x - reference, 6) : null;
+        if (signal.RangeLowPpm is not { } low || signal.RangeHighPpm is not { } high) return null;
+        return reference >= low - window - Epsilon && reference <= high + window + Epsilon ? 0 : null;
+    }
+}
