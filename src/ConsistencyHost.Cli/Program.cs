@@ -9,7 +9,8 @@ public static class Program
     private const string Help =
         "consistencyhost - checks NMR and HRMS data reported for a structure\n\n" +
         "usage:\n  consistencyhost " + CheckCommand.Usage + "\n  consistencyhost " + RulesCommand.Usage +
-        "\n  consistencyhost " + ServeCommand.Usage + "\n";
+        "\n  consistencyhost " + ServeCommand.Usage + "\n  consistencyhost " + EnvironmentsCommand.Usage +
+        "\n  consistencyhost " + PeaksCommand.Usage + "\n";
 
     public static async Task<int> Main(string[] args)
     {
@@ -30,8 +31,10 @@ public static class Program
         "check" => CheckCommand.Run(rest, stdout),
         "rules" => RulesCommand.Run(rest, stdout),
         "serve" => await ServeCommand.RunAsync(rest, stdout),
+        "environments" => EnvironmentsCommand.Run(rest, stdout),
+        "peaks" => PeaksCommand.Run(rest, stdout),
         "help" or "--help" or "-h" => Print(stdout),
-        _ => throw new UsageException($"unknown command '{command}'; expected check, rules or serve"),
+        _ => throw new UsageException($"unknown command '{command}'; expected check, rules, serve, environments or peaks"),
     };
 
     private static int Print(TextWriter stdout)
