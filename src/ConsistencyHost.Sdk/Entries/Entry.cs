@@ -7,6 +7,7 @@ namespace ConsistencyHost.Sdk.Entries;
 public sealed record Entry : IEntryView
 {
     private StructurePerception? _perception;
+    private EntryAnalysis? _analysis;
 
     /// <inheritdoc />
     public required string EntryId { get; init; }
@@ -38,4 +39,19 @@ public sealed record Entry : IEntryView
 
     /// <inheritdoc />
     public EntryClaims Claims { get; init; } = EntryClaims.None;
+
+    /// <inheritdoc />
+    /// <remarks>Created on first use for the current spectra and structure, like <see cref="Perception"/>.</remarks>
+    public EntryAnalysis Analysis
+    {
+        get
+        {
+            var perception = Perception;
+            var current = Volatile.Read(ref _analysis);
+            if (current is not null && ReferenceEquals(current.Spectra, Spectra) && ReferenceEquals(current.Perception, perception)) return current;
+            var created = new EntryAnalysis(Spectra, perception);
+            var raced = Interlocked.CompareExchange(ref _analysis, created, current);
+            return ReferenceEquals(raced, current) ? created : raced!;
+        }
+    }
 }

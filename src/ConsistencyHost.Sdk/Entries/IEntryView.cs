@@ -26,4 +26,7 @@ public interface IEntryView
 
     /// <summary>Claims beside the spectra (formula, HRMS).</summary>
     EntryClaims Claims { get; }
+
+    /// <summary>Shared analyses of the spectra against the structure (1H interpretation and assignment).</summary>
+    EntryAnalysis Analysis { get; }
 }

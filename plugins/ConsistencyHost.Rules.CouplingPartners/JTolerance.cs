@@ -1,0 +1,23 @@
+using System.Globalization;
+
+namespace ConsistencyHost.Rules.CouplingPartners;
+
+/// <summary>How far apart two reported J values may be and still be the same coupling.</summary>
+internal static class JTolerance
+{
+    /// <summary>
+    /// The larger of the option's minimum and one unit of the last decimal either value was written with
+    /// (7 Hz → 1 Hz; 7.1 Hz → 0.1 Hz), since each was rounded on its own.
+    /// </summary>
+    public static double Between(double a, double b, double minimum) =>
+        Math.Max(minimum, Math.Max(Unit(a), Unit(b)));
+
+    public static bool Same(double a, double b, double minimum) => Math.Abs(a - b) <= Between(a, b, minimum) + 1e-9;
+
+    private static double Unit(double value)
+    {
+        var text = value.ToString("0.###", CultureInfo.InvariantCulture);
+        var dot = text.IndexOf('.', StringComparison.Ordinal);
+        return dot < 0 ? 1.0 : Math.Pow(10, -(text.Length - dot - 1));
+    }
+}

@@ -1,0 +1,62 @@
+using ConsistencyHost.Chemistry.Perception.Symmetry;
+using ConsistencyHost.Sdk.Entries;
+using ConsistencyHost.Spectra.Analysis.Interpretation;
+using ConsistencyHost.Spectra.Model;
+
+namespace ConsistencyHost.Rules.CouplingPartners;
+
+/// <summary>
+/// A 1H spectrum with what the structure says about it: which signals are the compound's, and — when the
+/// proton counts allowed an assignment — which hydrogen classes each signal holds.
+/// </summary>
+internal sealed record PartnerContext(
+    Spectrum Spectrum,
+    int SpectrumIndex,
+    IReadOnlyList<int> CompoundSignals,
+    ProtonInterpretation? Interpretation,
+    NmrEquivalence? Equivalence)
+{
+    public static PartnerContext Create(IEntryView entry, int spectrumIndex)
+    {
+        var spectrum = entry.Spectra[spectrumIndex];
+        var interpretation = entry.Analysis.Protons(spectrumIndex);
+        var compound = interpretation?.CompoundSignals ?? [.. Enumerable.Range(0, spectrum.Signals.Count)];
+        return new PartnerContext(spectrum, spectrumIndex, compound, interpretation, entry.Perception?.Equivalence);
+    }
+
+    /// <summary>The classes the best assignment put in a signal; empty when there is no assignment.</summary>
+    public IReadOnlyList<int> ClassesOf(int signal)
+    {
+        if (Interpretation?.Assignment is not { } assignment) return [];
+        var k = IndexInCompound(signal);
+        return k < 0 ? [] : assignment.ClassesBySignal[k];
+    }
+
+    /// <summary>The compound signals holding a class that couples (2J, 3J, 4J) to a class of <paramref name="signal"/>.</summary>
+    public IReadOnlyList<int>? PartnerSignals(int signal)
+    {
+        if (Equivalence is null || ClassesOf(signal) is not { Count: > 0 } own) return null;
+        var partners = own.SelectMany(c => Equivalence.HydrogenClasses[c].Geminal2J
+                .Concat(Equivalence.HydrogenClasses[c].Vicinal3J)
+                .Concat(Equivalence.HydrogenClasses[c].LongRange4J))
+            .ToHashSet();
+        return [.. CompoundSignals.Where(s => s != signal && ClassesOf(s).Any(partners.Contains))];
+    }
+
+    /// <summary>True when a class of the signal has 19F or 31P within three bonds.</summary>
+    public bool HasHeteronuclearNeighbour(int signal) =>
+        Equivalence is null
+            ? true
+            : ClassesOf(signal).Any(c => Equivalence.HydrogenClasses[c].HeteronuclearNeighbours.Length > 0)
+              || (ClassesOf(signal).Count == 0 && Equivalence.HydrogenClasses.Any(h => h.HeteronuclearNeighbours.Length > 0));
+
+    private int IndexInCompound(int signal)
+    {
+        for (var k = 0; k < CompoundSignals.Count; k++)
+        {
+            if (CompoundSignals[k] == signal) return k;
+        }
+
+        return -1;
+    }
+}

@@ -1,0 +1,126 @@
+using ConsistencyHost.Chemistry.Model;
+using ConsistencyHost.Chemistry.Perception.Symmetry;
+using ConsistencyHost.Spectra.Analysis.Assignment;
+using ConsistencyHost.Spectra.Model;
+using ConsistencyHost.Spectra.Solvents;
+
+namespace ConsistencyHost.Spectra.Analysis.Interpretation;
+
+/// <summary>
+/// Reads a 1H list against a structure. Signals that sit on residual solvent, water or an impurity are
+/// candidates for not being the compound's; the reading that the assignment solver explains best wins, and
+/// on a tie every signal stays the compound's (a chemist's reported signal is not discarded lightly).
+/// </summary>
+public static class ProtonInterpreter
+{
+    /// <summary>Interprets <paramref name="spectrum"/> for <paramref name="molecule"/>.</summary>
+    public static ProtonInterpretation Interpret(Spectrum spectrum, Molecule molecule, NmrEquivalence equivalence, ResidualMatchOptions? matchOptions = null)
+    {
+        ArgumentNullException.ThrowIfNull(spectrum);
+        var classes = ClassInputs.From(equivalence);
+        var residuals = new ResidualMatcher(matchOptions).Match(spectrum);
+        var minor = spectrum.Signals.Select(IsMinorSpecies).ToArray();
+        var candidates = Candidates(residuals, spectrum.Signals, molecule, minor);
+        var (counts, fit) = ProtonCounts(spectrum.Signals, minor, classes);
+        var best = Choose(spectrum.Signals, counts, minor, candidates, classes);
+        var roles = new SignalRole[spectrum.Signals.Count];
+        for (var i = 0; i < roles.Length; i++)
+        {
+            roles[i] = minor[i] ? SignalRole.MinorSpecies : best.Removed.TryGetValue(i, out var role) ? role : SignalRole.Compound;
+        }
+
+        return new ProtonInterpretation
+        {
+            Roles = roles,
+            ProtonCounts = counts,
+            CompoundSignals = best.Kept,
+            Classes = classes,
+            Assignment = best.Assignment,
+            IntegralFit = fit,
+            Residuals = residuals,
+        };
+    }
+
+    private static bool IsMinorSpecies(Signal signal) =>
+        signal.Notes.Any(n => n.Contains("minor", StringComparison.OrdinalIgnoreCase));
+
+    /// <summary>Signals that may not be the compound's, each with the role it would have.</summary>
+    private static Dictionary<int, SignalRole> Candidates(ResidualMatchResult residuals, IReadOnlyList<Signal> signals, Molecule molecule, bool[] minor)
+    {
+        var selfImpurities = residuals.Impurities.Where(e => SameCompound.Is(molecule, e.Impurity.Smiles)).Select(e => e.Impurity.Name).ToHashSet(StringComparer.Ordinal);
+        var credible = residuals.Impurities.Where(e => e.MeetsMinimum).Select(e => e.Impurity.Name).ToHashSet(StringComparer.Ordinal);
+        var result = new Dictionary<int, SignalRole>();
+        foreach (var match in residuals.Matches)
+        {
+            if (minor[match.SignalIndex] || result.ContainsKey(match.SignalIndex)) continue;
+            if (!ResidualShape.Fits(signals[match.SignalIndex], match)) continue;
+            var role = match.Kind switch
+            {
+                ResidualMatchKind.ResidualSolvent => SignalRole.ResidualSolvent,
+                ResidualMatchKind.Water => SignalRole.Water,
+                _ when credible.Contains(match.Name) && !selfImpurities.Contains(match.Name) => SignalRole.Impurity,
+                _ => SignalRole.Compound,
+            };
+            if (role != SignalRole.Compound) result[match.SignalIndex] = role;
+        }
+
+        return result;
+    }
+
+    private static (int?[] Counts, IntegralFit? Fit) ProtonCounts(IReadOnlyList<Signal> signals, bool[] minor, IReadOnlyList<ClassInput> classes)
+    {
+        var counts = signals.Select(s => s.ProtonCount is { } n ? (int?)(int)Math.Round(n) : null).ToArray();
+        var counted = Enumerable.Range(0, signals.Count).Where(i => !minor[i]).ToList();
+        if (counted.All(i => counts[i] is not null) || !counted.All(i => signals[i].Integral is > 0))
+        {
+            return (counts, null);
+        }
+
+        var total = classes.Sum(c => c.Size);
+        var exchangeable = classes.Where(c => c.IsExchangeable).Sum(c => c.Size);
+        var fit = IntegralScale.Fit([.. counted.Select(i => signals[i].Integral!.Value)], Math.Max(1, total - exchangeable), Math.Max(1, total + 2));
+        if (fit is null) return (counts, null);
+        for (var k = 0; k < counted.Count; k++) counts[counted[k]] = fit.Counts[k];
+        return (counts, fit);
+    }
+
+    private sealed record Reading(List<int> Kept, Dictionary<int, SignalRole> Removed, AssignmentResult? Assignment, double Cost);
+
+    private static Reading Choose(IReadOnlyList<Signal> signals, int?[] counts, bool[] minor, Dictionary<int, SignalRole> candidates, IReadOnlyList<ClassInput> classes)
+    {
+        var options = new List<Dictionary<int, SignalRole>> { new() };
+        if (candidates.Count > 0) options.Add(candidates);
+        if (candidates.Count is > 1 and <= 8)
+        {
+            options.AddRange(candidates.Select(c => new Dictionary<int, SignalRole> { [c.Key] = c.Value }));
+        }
+
+        Reading? best = null;
+        foreach (var removed in options)
+        {
+            var reading = Evaluate(signals, counts, minor, removed, classes);
+            if (best is null || reading.Cost < best.Cost - 1e-9 || (Math.Abs(reading.Cost - best.Cost) <= 1e-9 && reading.Removed.Count < best.Removed.Count))
+            {
+                best = reading;
+            }
+        }
+
+        return best!;
+    }
+
+    private static Reading Evaluate(IReadOnlyList<Signal> signals, int?[] counts, bool[] minor, Dictionary<int, SignalRole> removed, IReadOnlyList<ClassInput> classes)
+    {
+        var kept = Enumerable.Range(0, signals.Count).Where(i => !minor[i] && !removed.ContainsKey(i)).ToList();
+        if (kept.Any(i => counts[i] is null))
+        {
+            // Without counts only the number of signals can speak: a surplus over the classes is better explained
+            // by the candidates.
+            var surplus = Math.Max(0, kept.Count - classes.Count);
+            return new Reading(kept, removed, null, surplus);
+        }
+
+        var inputs = kept.Select(i => new SignalInput(counts[i]!.Value, PatternReading.ImpliedCoupledProtons(signals[i].MultiplicityPattern))).ToList();
+        var assignment = AssignmentSolver.Solve(classes, inputs);
+        return new Reading(kept, removed, assignment, assignment.Cost);
+    }
+}
