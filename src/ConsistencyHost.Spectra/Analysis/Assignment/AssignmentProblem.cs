@@ -14,7 +14,15 @@ namespace ConsistencyHost.Spectra.Analysis.Assignment;
 /// The most protons (and spin-½ heteronuclei) it can be split by: the typical ones plus exchangeable vicinal
 /// partners, long-range (4J) partners and F/P neighbours. A pattern implying more is impossible.
 /// </param>
-public sealed record ClassInput(int Size, bool IsExchangeable, int TypicalCoupledProtons, int MaxCoupledProtons);
+/// <param name="Source">The structure's hydrogen class this input stands for (-1 when built by hand); two
+/// inputs share a source when slow exchange splits one class.</param>
+public sealed record ClassInput(int Size, bool IsExchangeable, int TypicalCoupledProtons, int MaxCoupledProtons, int Source = -1)
+{
+    /// <summary>Same size, exchangeability and coupling numbers: interchangeable for the solver.</summary>
+    public bool IsInterchangeableWith(ClassInput other) =>
+        Size == other.Size && IsExchangeable == other.IsExchangeable
+        && TypicalCoupledProtons == other.TypicalCoupledProtons && MaxCoupledProtons == other.MaxCoupledProtons;
+}
 
 /// <summary>One reported 1H signal as the solver sees it.</summary>
 /// <param name="ProtonCount">The reported proton count (integral rounded to a whole number).</param>

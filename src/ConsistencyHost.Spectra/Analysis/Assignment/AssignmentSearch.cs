@@ -23,7 +23,10 @@ internal sealed class AssignmentSearch
         _classes = classes;
         _signals = signals;
         _options = options;
-        _order = [.. Enumerable.Range(0, classes.Count).OrderByDescending(i => classes[i].Size).ThenBy(i => i)];
+        // Largest first; interchangeable classes next to each other so that their ordering constraint applies.
+        _order = [.. Enumerable.Range(0, classes.Count)
+            .OrderByDescending(i => classes[i].Size).ThenBy(i => classes[i].IsExchangeable)
+            .ThenBy(i => classes[i].TypicalCoupledProtons).ThenBy(i => classes[i].MaxCoupledProtons).ThenBy(i => i)];
         _choice = new int[classes.Count];
         _filled = new int[signals.Count];
         _members = new int[signals.Count];
@@ -102,7 +105,7 @@ internal sealed class AssignmentSearch
         return false;
     }
 
-    private bool SameKind(int a, int b) => _classes[a] == _classes[b];
+    private bool SameKind(int a, int b) => _classes[a].IsInterchangeableWith(_classes[b]);
 
     private double MissingCost(int current) => _classes[current].IsExchangeable ? 0 : _options.MissingClassCost;
 

@@ -27,10 +27,34 @@ public static class ClassInputs
                         + SizeOf(classes, group.LongRange4J, c, exchangeable: null)
                         + SelfPartners(group)
                         + group.HeteronuclearNeighbours.Length;
-            inputs[c] = new ClassInput(group.ParentAtoms.Length, group.IsExchangeable, group.IsExchangeable ? 0 : typical, typical + extra);
+            inputs[c] = new ClassInput(group.ParentAtoms.Length, group.IsExchangeable, group.IsExchangeable ? 0 : typical, typical + extra, c);
         }
 
         return inputs;
+    }
+
+    /// <summary>
+    /// The inputs with each class in <paramref name="splits"/> replaced by its two halves (slow exchange, e.g.
+    /// amide rotation): same coupling numbers, half the protons each.
+    /// </summary>
+    public static IReadOnlyList<ClassInput> Split(IReadOnlyList<ClassInput> inputs, IEnumerable<int> splits)
+    {
+        var split = splits.ToHashSet();
+        var result = new List<ClassInput>(inputs.Count + split.Count);
+        foreach (var input in inputs)
+        {
+            if (split.Contains(input.Source) && input.Size % 2 == 0)
+            {
+                result.Add(input with { Size = input.Size / 2 });
+                result.Add(input with { Size = input.Size / 2 });
+            }
+            else
+            {
+                result.Add(input);
+            }
+        }
+
+        return result;
     }
 
     private static int SizeOf(ImmutableArray<HydrogenClass> classes, ImmutableArray<int> partners, int self, bool? exchangeable)

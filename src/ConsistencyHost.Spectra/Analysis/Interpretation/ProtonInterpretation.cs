@@ -34,6 +34,9 @@ public sealed record ProtonInterpretation
     /// <summary>The integer fit of raw integrals, when counts came from integrals.</summary>
     public IntegralFit? IntegralFit { get; init; }
 
+    /// <summary>True when the data read better with slow amide C–N rotation (N-substituents distinct).</summary>
+    public bool SlowAmideRotation { get; init; }
+
     /// <summary>What the residual matcher found (all matches, before interpretation).</summary>
     public required ResidualMatchResult Residuals { get; init; }
 

@@ -17,12 +17,24 @@ public static class ProtonInterpreter
     public static ProtonInterpretation Interpret(Spectrum spectrum, Molecule molecule, NmrEquivalence equivalence, ResidualMatchOptions? matchOptions = null)
     {
         ArgumentNullException.ThrowIfNull(spectrum);
-        var classes = ClassInputs.From(equivalence);
+        var fast = ClassInputs.From(equivalence);
+        var splits = AmideRotation.Splits(molecule, equivalence).Hydrogen;
         var residuals = new ResidualMatcher(matchOptions).Match(spectrum);
         var minor = spectrum.Signals.Select(IsMinorSpecies).ToArray();
         var candidates = Candidates(residuals, spectrum.Signals, molecule, minor);
-        var (counts, fit) = ProtonCounts(spectrum.Signals, minor, classes);
-        var best = Choose(spectrum.Signals, counts, minor, candidates, classes);
+        var (counts, fit) = ProtonCounts(spectrum.Signals, minor, fast);
+        var best = Choose(spectrum.Signals, counts, minor, candidates, fast);
+        var classes = fast;
+        if (splits.Count > 0)
+        {
+            // Slow amide rotation is a second reading of the structure; it must explain the data strictly better.
+            var slow = ClassInputs.Split(fast, splits.Select(s => s.ClassIndex));
+            var slowBest = Choose(spectrum.Signals, counts, minor, candidates, slow);
+            if (slowBest.Cost < best.Cost - 1e-9)
+            {
+                (best, classes) = (slowBest, slow);
+            }
+        }
         var roles = new SignalRole[spectrum.Signals.Count];
         for (var i = 0; i < roles.Length; i++)
         {
@@ -38,6 +50,7 @@ public static class ProtonInterpreter
             Assignment = best.Assignment,
             IntegralFit = fit,
             Residuals = residuals,
+            SlowAmideRotation = !ReferenceEquals(classes, fast),
         };
     }
 
