@@ -15,15 +15,20 @@ internal static class OneDTagReader
     public static Spectrum Read(Nucleus nucleus, SdTag tag, List<LogicalLine> lines, ReaderContext context)
     {
         double? larmor = null;
+        var sawLarmor = false;
         string? decoupled = null;
         var signals = new List<Signal>();
         foreach (var line in lines)
         {
-            if (char.IsAsciiDigit(line.Text[0]) || line.Text[0] is '-' or '.') { if (Signal(line, nucleus, context) is { } s) signals.Add(s); }
-            else if (Header(line.Text, "Larmor") is { } l) larmor = Fields.TryNumber(l, out var mhz) ? mhz : Bad(line, l, context);
+            if (Header(line.Text, "Larmor") is { } l)
+            {
+                sawLarmor = true;
+                larmor = Fields.TryNumber(l, out var mhz) ? mhz : Bad(line, l, context);
+            }
             else if (Header(line.Text, "Decoupled") is { } d) decoupled = Fields.Split(d)[0];
+            else if (!IsHeaderLine(line.Text) && Signal(line, nucleus, context) is { } s) signals.Add(s);
         }
-        if (larmor is null) context.Sink.Add(tag.HeaderLine, tag.Name, NmredataMessages.ExpectedLarmor, ProblemSeverity.Warning);
+        if (!sawLarmor) context.Sink.Add(tag.HeaderLine, tag.Name, NmredataMessages.ExpectedLarmor, ProblemSeverity.Warning);
         return new Spectrum
         {
             Nucleus = nucleus, FrequencyMHz = larmor, Decoupled = decoupled,
@@ -35,6 +40,15 @@ internal static class OneDTagReader
     {
         context.Sink.Add(line.Line, value, NmredataMessages.ExpectedNumber);
         return null;
+    }
+
+    /// <summary>"Name=value" with an identifier name (Spectrum_Location=, Pulseprogram=, MD5_1r=, Sequence= …).</summary>
+    private static bool IsHeaderLine(string text)
+    {
+        var equals = text.IndexOf('=');
+        var comma = text.IndexOf(',');
+        return equals > 0 && (comma < 0 || equals < comma) && char.IsAsciiLetter(text[0])
+            && text[..equals].All(c => char.IsAsciiLetterOrDigit(c) || c == '_');
     }
 
     private static string? Header(string text, string name) =>
