@@ -110,6 +110,15 @@ public sealed class JcampReaderTests
     {
         var result = JcampReader.Read("##TITLE= t\n##.OBSERVE NUCLEUS= ^15N\n##PEAK TABLE= (XY..XY)\n1.0, 2.0\n##END=");
         Assert.True(result.Succeeded);
-        Assert.Equal(JcampMessages.ExpectedNucleus, Assert.Single(result.Problems).Expected);
+        var problem = Assert.Single(result.Problems);
+        Assert.Equal((2, JcampMessages.ExpectedNucleus), (problem.Line, problem.Expected));
+    }
+
+    [Fact]
+    public void Read_MissingNucleus_WarnsOnTheTitleLine()
+    {
+        var result = JcampReader.Read("\n##TITLE= t\n##PEAK TABLE= (XY..XY)\n1.0, 2.0\n##END=");
+        var problem = Assert.Single(result.Problems);
+        Assert.Equal((2, JcampMessages.ExpectedNucleus, ProblemSeverity.Warning), (problem.Line, problem.Expected, problem.Severity));
     }
 }
