@@ -69,6 +69,7 @@ public sealed class ReportedTextReaderParseTableTests
         { Common, "1H NMR (400 MHz, CDCl3) δ 5.35 (d, 2JHF = 47.5 Hz, 2H)", "1H 400 CDCl3 | 5.35 d J2:47.5F n2" },
         { Common, "1H NMR (400 MHz, CDCl3) δ 7.02 (t, J = 8.7 Hz (H-F), 2H)", "1H 400 CDCl3 | 7.02 t J8.7F n2" },
         { Common, "1H NMR (400 MHz, CDCl3) δ 7.02 (dd, J = 8.0, ⁴J(H,F) = 5.5 Hz, 1H)", "1H 400 CDCl3 | 7.02 dd J8,4:5.5F n1" },
+        { Common, "1H NMR (400 MHz, CDCl3) δ 7.02 (dd, J(H2,H3) = 8.0 Hz, J = 2.0 Hz, 1H, H-2)", "1H 400 CDCl3 | 7.02 dd J8(H2,H3),2 n1 @H-2" },
         { Common, "1H NMR (400 MHz, CDCl3) δ 3.70 (ABq, JAB = 12.0 Hz, 2H)", "1H 400 CDCl3 | 3.7 ABq J12 n2" },
         // Multiplicities
         { Pmc4199947, "1H NMR (400 MHz, CDCl3) δ 5.02 (bs, 1H)", "1H 400 CDCl3 | 5.02 br s n1" },
