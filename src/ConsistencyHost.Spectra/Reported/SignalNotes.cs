@@ -19,6 +19,13 @@ internal static class SignalNotes
         "form", "e", "z", "(e)", "(z)", "on", "addition",
     };
 
+    /// <summary>"3:1", "55:45" as in "rotamers 3:1".</summary>
+    private static bool IsRatio(string word)
+    {
+        var colon = word.IndexOf(':');
+        return colon > 0 && colon < word.Length - 1 && word.Remove(colon, 1).All(char.IsAsciiDigit);
+    }
+
     public static bool IsNote(string text)
     {
         var words = text.Split(' ', StringSplitOptions.RemoveEmptyEntries);
@@ -26,7 +33,7 @@ internal static class SignalNotes
         foreach (var word in words)
         {
             if (KeyWords.Contains(word)) hasKey = true;
-            else if (!Fillers.Contains(word)) return false;
+            else if (!Fillers.Contains(word) && !IsRatio(word)) return false;
         }
         return hasKey;
     }

@@ -102,6 +102,8 @@ public sealed class ReportedTextReaderParseTableTests
         // Notes
         { Common, "1H NMR (400 MHz, CDCl3) δ 5.10 (br s, 1H, exchangeable with D2O)", "1H 400 CDCl3 | 5.1 br s n1 !exchangeable with D2O" },
         { Common, "1H NMR (400 MHz, CDCl3) δ 3.41 (s, 3H, minor rotamer), 3.38 (s, 3H, major rotamer)", "1H 400 CDCl3 | 3.41 s n3 !minor rotamer ; 3.38 s n3 !major rotamer" },
+        { Common, "1H NMR (400 MHz, CDCl3) δ 3.41 (s, 3H, rotamers 3:1), 3.38 (s, 3H, signals doubled due to rotamers)", "1H 400 CDCl3 | 3.41 s n3 !rotamers 3:1 ; 3.38 s n3 !signals doubled due to rotamers" },
+        { Common, "1H NMR (400 MHz, CDCl3) δ 3.95 (AB quartet, J = 15.1 Hz, 2H)", "1H 400 CDCl3 | 3.95 AB quartet J15.1 n2" },
         { Common, "1H NMR (400 MHz, CDCl3) δ 3.41* (s, 3H)", "1H 400 CDCl3 | 3.41 s n3 !*" },
         // Several spectra and HRMS in one text
         { Gottlieb, "1H NMR (300 MHz, CDCl3) δ 4.12 (q, J = 7 Hz, 2H), 2.05 (s, 3H), 1.26 (t, J = 7 Hz, 3H); 13C NMR (75 MHz, CDCl3) δ 171.36, 60.49, 21.04, 14.19.",
