@@ -2,6 +2,7 @@ using System.Reflection;
 using ConsistencyHost.Spectra.Jcamp;
 using ConsistencyHost.Spectra.Nmredata;
 using ConsistencyHost.Spectra.Reported;
+using ConsistencyHost.Spectra.Solvents;
 
 namespace ConsistencyHost.Spectra.Tests;
 
@@ -45,6 +46,17 @@ public sealed class DocsExamplesTests
         var constants = messages.GetFields(BindingFlags.Public | BindingFlags.Static).Where(f => f.IsLiteral).ToList();
         Assert.NotEmpty(constants);
         Assert.All(constants, f => Assert.Contains((string)f.GetRawConstantValue()!, Docs));
+    }
+
+    [Fact]
+    public void Docs_QuickStartSnippet_FindsResidualChloroform()
+    {
+        var result = ReportedTextReader.Read("1H NMR (400 MHz, CDCl3) δ 7.26 (s, 1H), 2.05 (s, 3H).");
+        Assert.True(result.Succeeded);
+        var matches = new ResidualMatcher().Match(result.Spectra[0]);   // 7.26 → residual CHCl3
+        // Source: Gottlieb 1997 Table 1, CHCl3 in CDCl3 at 7.26.
+        Assert.Contains(matches.Matches, m => m.SignalIndex == 0 && m.Kind == ResidualMatchKind.ResidualSolvent);
+        Assert.Contains("var matches = new ResidualMatcher().Match(result.Spectra[0]);", Docs);
     }
 
     [Fact]
