@@ -29,9 +29,14 @@ internal static class MultiplicityText
         return ReadCore(reported, string.Join(' ', core), flags);
     }
 
-    /// <summary>Fast path for one word (most multiplicities): a lone modifier ("br") is not a multiplicity.</summary>
-    private static Multiplicity ReadCoreOrModifier(string word) =>
-        ModifierOf(word) != MultiplicityFlags.None ? Unrecognised(word) : ReadCore(word, word, MultiplicityFlags.None);
+    /// <summary>Fast path for one word (most multiplicities); a lone "app" is not a multiplicity.</summary>
+    private static Multiplicity ReadCoreOrModifier(string word) => ModifierOf(word) switch
+    {
+        // Common practice: "(br, 1H)" reports a broad, unresolved signal (NH, OH); read as broad m.
+        MultiplicityFlags.Broad => Make(word, [], MultiplicityFlags.Broad | MultiplicityFlags.Multiplet),
+        MultiplicityFlags.None => ReadCore(word, word, MultiplicityFlags.None),
+        _ => Unrecognised(word),
+    };
 
     private static MultiplicityFlags ModifierOf(string word) => Lower(word) switch
     {

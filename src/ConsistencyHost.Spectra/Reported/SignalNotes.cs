@@ -16,7 +16,7 @@ internal static class SignalNotes
     {
         "with", "by", "d2o", "solvent", "signal", "signals", "peak", "peaks", "residual", "water", "partially",
         "in", "the", "of", "and", "due", "to", "doubled", "not", "observed", "visible", "hdo", "cdcl3", "dmso-d6",
-        "form", "e", "z", "(e)", "(z)", "on", "addition",
+        "form", "e", "z", "(e)", "(z)", "on", "addition", "chcl3", "h2o", "dmso", "acetone", "isomer)",
     };
 
     /// <summary>"3:1", "55:45" as in "rotamers 3:1".</summary>
