@@ -7,16 +7,16 @@ namespace ConsistencyHost.Spectra.Jcamp;
 internal sealed record PeakContext(Nucleus Nucleus, double? FrequencyMHz, string? Solvent, double? TemperatureK,
     double XFactor, double YFactor, bool XInHz)
 {
-    public static PeakContext From(Dictionary<string, string> labels, List<JcampRecord> records, JcampProblemSink sink)
+    public static PeakContext From(Dictionary<string, string> labels, List<JcampRecord> records, JcampProblemSink sink, int titleLine)
     {
         var nucleus = NucleusNames.Parse(Get(labels, ".OBSERVENUCLEUS"));
-        if (nucleus == Nucleus.Unknown) Warn(records, ".OBSERVENUCLEUS", "TITLE", sink, JcampMessages.ExpectedNucleus);
+        if (nucleus == Nucleus.Unknown) Warn(records, ".OBSERVENUCLEUS", titleLine, sink, JcampMessages.ExpectedNucleus);
         var frequency = Number(Get(labels, ".OBSERVEFREQUENCY"));
         var solvent = Get(labels, ".SOLVENTNAME") is { Length: > 0 } s ? SolventNames.Normalise(s) ?? s : null;
         var units = Get(labels, "XUNITS")?.ToUpperInvariant();
         var inHz = units == "HZ";
-        if (units is not (null or "PPM" or "HZ")) Warn(records, "XUNITS", "XUNITS", sink, JcampMessages.ExpectedKnownXUnits, ProblemSeverity.Error);
-        if (inHz && frequency is null) Warn(records, "XUNITS", "XUNITS", sink, JcampMessages.ExpectedObserveFrequency, ProblemSeverity.Error);
+        if (units is not (null or "PPM" or "HZ")) Warn(records, "XUNITS", titleLine, sink, JcampMessages.ExpectedKnownXUnits, ProblemSeverity.Error);
+        if (inHz && frequency is null) Warn(records, "XUNITS", titleLine, sink, JcampMessages.ExpectedObserveFrequency, ProblemSeverity.Error);
         return new PeakContext(nucleus, frequency, solvent, Temperature(Get(labels, "TEMPERATURE")),
             Number(Get(labels, "XFACTOR")) ?? 1, Number(Get(labels, "YFACTOR")) ?? 1, inHz);
     }
@@ -51,11 +51,12 @@ internal sealed record PeakContext(Nucleus Nucleus, double? FrequencyMHz, string
         return double.TryParse(first, NumberStyles.Float, CultureInfo.InvariantCulture, out var v) ? v : null;
     }
 
-    private static void Warn(List<JcampRecord> records, string label, string fallback, JcampProblemSink sink, string expected,
+    /// <summary>A problem on the record with <paramref name="label"/>, or on the block's title line when it is missing.</summary>
+    private static void Warn(List<JcampRecord> records, string label, int titleLine, JcampProblemSink sink, string expected,
         ProblemSeverity severity = ProblemSeverity.Warning)
     {
-        var record = records.LastOrDefault(r => r.Label == label) ?? records.FirstOrDefault(r => r.Label == fallback);
-        var line = record?.Value.Number ?? 0;
+        var record = records.LastOrDefault(r => r.Label == label);
+        var line = record?.Value.Number ?? titleLine;
         sink.Add(line, 1, record is null ? "" : "##" + record.RawLabel + "=" + record.Value.Text, expected, severity);
     }
 }

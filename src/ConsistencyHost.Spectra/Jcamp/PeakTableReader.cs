@@ -17,7 +17,7 @@ internal static class PeakTableReader
                 sink.Add(full.Value.Number, 1, "##" + full.RawLabel, JcampMessages.ExpectedPeakTable, ProblemSeverity.Warning);
             return null;
         }
-        var context = PeakContext.From(labels, records, sink);
+        var context = PeakContext.From(labels, records, sink, titleLine);
         var peaks = table.Label == "PEAKTABLE" ? TupleReader.ReadTable(table, sink) : TupleReader.ReadAssignments(table, sink);
         if (peaks is null) return null;
         CheckNpoints(records, peaks.Count, sink);

@@ -11,7 +11,7 @@ internal static class TupleReader
 {
     public static List<RawPeak>? ReadTable(JcampRecord record, JcampProblemSink sink)
     {
-        var form = record.Value.Text.Trim().ToUpperInvariant().Replace(" ", "");
+        var (form, sameLine) = Form(record.Value);
         var size = form switch { "(XY..XY)" => 2, "(XYW..XYW)" or "(XYM..XYM)" => 3, _ => 0 };
         if (size == 0)
         {
@@ -20,10 +20,20 @@ internal static class TupleReader
         }
         var hasM = form == "(XYM..XYM)";
         var peaks = new List<RawPeak>();
-        foreach (var line in record.Continuation)
+        foreach (var line in sameLine is null ? record.Continuation : record.Continuation.Prepend(sameLine.Value))
             foreach (var tuple in Tuples(line, size, sink))
                 if (ToPeak(line.Number, tuple, hasM, sink) is { } peak) peaks.Add(peak);
         return peaks;
+    }
+
+    /// <summary>The variable list "(XY..XY)" and, when tuples follow on the same line, that rest as a data line.</summary>
+    private static (string Form, JcampLine? SameLine) Form(JcampLine value)
+    {
+        var close = value.Text.IndexOf(')');
+        var form = (close < 0 ? value.Text : value.Text[..(close + 1)]).Trim().ToUpperInvariant().Replace(" ", "");
+        if (close < 0 || value.Text[(close + 1)..].Trim().Length == 0) return (form, null);
+        var blanks = new string(' ', value.ColumnOffset + close + 1);
+        return (form, new JcampLine(value.Number, blanks + value.Text[(close + 1)..], 0));
     }
 
     public static List<RawPeak>? ReadAssignments(JcampRecord record, JcampProblemSink sink)

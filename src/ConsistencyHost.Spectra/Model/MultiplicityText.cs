@@ -29,11 +29,16 @@ internal static class MultiplicityText
         return ReadCore(reported, string.Join(' ', core), flags);
     }
 
-    /// <summary>Fast path for one word (most multiplicities): a lone modifier ("br") is not a multiplicity.</summary>
-    private static Multiplicity ReadCoreOrModifier(string word) =>
-        ModifierOf(word) != MultiplicityFlags.None ? Unrecognised(word) : ReadCore(word, word, MultiplicityFlags.None);
+    /// <summary>Fast path for one word (most multiplicities); a lone "app" is not a multiplicity.</summary>
+    private static Multiplicity ReadCoreOrModifier(string word) => ModifierOf(word) switch
+    {
+        // Common practice: "(br, 1H)" reports a broad, unresolved signal (NH, OH); read as broad m.
+        MultiplicityFlags.Broad => Make(word, [], MultiplicityFlags.Broad | MultiplicityFlags.Multiplet),
+        MultiplicityFlags.None => ReadCore(word, word, MultiplicityFlags.None),
+        _ => Unrecognised(word),
+    };
 
-    private static MultiplicityFlags ModifierOf(string word) => word.ToLowerInvariant() switch
+    private static MultiplicityFlags ModifierOf(string word) => Lower(word) switch
     {
         "br" or "br." or "b" or "broad" or "(br)" or "(br.)" or "(broad)" => MultiplicityFlags.Broad,
         "app" or "app." or "apparent" or "(app)" => MultiplicityFlags.Apparent,
@@ -43,7 +48,7 @@ internal static class MultiplicityText
     private static Multiplicity ReadCore(string reported, string core, MultiplicityFlags flags)
     {
         if (IsSecondOrder(core)) return new(reported, [], flags | MultiplicityFlags.Recognised, core);
-        var lower = core.ToLowerInvariant();
+        var lower = Lower(core);
         switch (lower)
         {
             case "s" or "singlet":
@@ -58,6 +63,14 @@ internal static class MultiplicityText
         if (lower.Length > 2 && lower[0] == 'b' && lower[1] != 'r' && Components(lower[1..]) is { } broad)
             return Make(reported, broad, flags | MultiplicityFlags.Broad);
         return Components(lower) is { } parts ? Make(reported, parts, flags) : Unrecognised(reported);
+    }
+
+    /// <summary>The text in lower case, without allocating when it already is (the usual case).</summary>
+    private static string Lower(string text)
+    {
+        foreach (var c in text)
+            if (char.IsUpper(c)) return text.ToLowerInvariant();
+        return text;
     }
 
     private static Multiplicity Make(string reported, int[] parts, MultiplicityFlags flags) =>

@@ -42,6 +42,9 @@ public sealed record Signal
     /// <summary>Number of observed nuclei a 19F or 31P signal stands for ("3F"); null when not stated.</summary>
     public int? NucleusCount { get; init; }
 
+    /// <summary>Hydrogens attached to the carbon of a 13C signal (NMReDATA N= in 13C spectra, DEPT); null when not stated.</summary>
+    public int? AttachedHydrogenCount { get; init; }
+
     /// <summary>Line width at half height in Hz (JCAMP-DX XYW tables, NMReDATA W=); null when not stated.</summary>
     public double? LineWidthHz { get; init; }
 

@@ -8,9 +8,23 @@ internal static class Assignments
 {
     public static bool IsAssignment(string text)
     {
+        text = WithoutMultiplier(text);
         if (!text.Contains(" and ") && !text.Contains(" & ") && !text.Contains(" + ")) return IsLabel(text);
         var parts = text.Split([" and ", " & ", " + "], StringSplitOptions.None);
         return parts.All(IsLabel);
+    }
+
+    /// <summary>"2 × CH3", "2 x OMe", "4×CH2" → the label after the multiplier ("4×CH2" stays as it is).</summary>
+    private static string WithoutMultiplier(string text)
+    {
+        var i = 0;
+        while (i < text.Length && char.IsAsciiDigit(text[i])) i++;
+        if (i == 0 || i >= text.Length || text[i] != ' ') return text;
+        while (i < text.Length && text[i] == ' ') i++;
+        if (i >= text.Length || text[i] is not ('×' or 'x')) return text;
+        i++;
+        while (i < text.Length && text[i] == ' ') i++;
+        return i < text.Length ? text[i..] : text;
     }
 
     private static bool IsLabel(string text)

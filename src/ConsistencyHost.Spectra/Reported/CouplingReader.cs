@@ -29,8 +29,23 @@ internal static class CouplingReader
             c.Pos++;
         }
         c.Pos++; // the J itself
-        var pair = ReadTypeOrIndex(c);
+        var partner = ReadLabelPair(c);
+        var pair = partner is null ? ReadTypeOrIndex(c) : null;
+        var start = into.Count;
         ReadValues(c, item, observed, decimalComma, sink, into, pair, bonds);
+        for (var i = start; i < into.Count; i++) into[i] = into[i] with { PartnerLabel = partner };
+    }
+
+    /// <summary>"J(H2,H3)" or "J(H-2,H-3)": two assignment labels, kept as written ("H2,H3") in PartnerLabel.</summary>
+    private static string? ReadLabelPair(TextCursor c)
+    {
+        if (c.Current != '(') return null;
+        var close = c.MatchingParen(c.Pos);
+        if (close < 0) return null;
+        var inner = c.Text[(c.Pos + 1)..close];
+        if (!inner.Contains(',') || ReadPair(inner) is not null) return null;
+        c.Pos = close + 1;
+        return string.Join(",", inner.Split(',').Select(p => p.Trim()));
     }
 
     /// <summary>Reads a bare continuation: "2.0 Hz", "6.7", "8.0 and 2.0 Hz".</summary>

@@ -62,6 +62,7 @@ internal static class DetailsReader
     /// <summary>"2H", "2 H", "0.5H", "2C", "3F", "1P".</summary>
     private static bool TryCount(DetailItem item, SignalDraft draft, ProblemSink sink)
     {
+        if (!char.IsAsciiDigit(item.Text[0]) || item.Text[^1] is not ('H' or 'C' or 'F' or 'P')) return false;
         var c = new TextCursor(item.Text);
         if (!c.TryNumber(false, out var value, out var decimals)) return false;
         c.SkipSpaces();

@@ -11,12 +11,18 @@ internal sealed class SignalDraft(int offset, Nucleus nucleus)
     public double? Low { get; set; }
     public double? High { get; set; }
     public string? Multiplicity { get; set; }
-    public List<Coupling> Couplings { get; } = [];
+    private List<Coupling>? couplings;
+    private List<string>? assignments;
+    private List<string>? notes;
+
+    // Created on first use: most signals have no couplings, assignments or notes (allocation matters in the hot path).
+    public List<Coupling> Couplings => couplings ??= [];
     public double? ProtonCount { get; set; }
     public int? CarbonCount { get; set; }
     public int? NucleusCount { get; set; }
-    public List<string> Assignments { get; } = [];
-    public List<string> Notes { get; } = [];
+    public List<string> Assignments => assignments ??= [];
+    public List<string> Notes => notes ??= [];
+    public bool HasNotes => notes is { Count: > 0 };
     public bool HasDetails { get; set; }
 
     public bool HasCount => ProtonCount is not null || CarbonCount is not null || NucleusCount is not null;
@@ -27,12 +33,12 @@ internal sealed class SignalDraft(int offset, Nucleus nucleus)
         RangeLowPpm = Low,
         RangeHighPpm = High,
         Multiplicity = Multiplicity ?? "",
-        Couplings = [.. Couplings],
+        Couplings = couplings ?? (IReadOnlyList<Coupling>)[],
         ProtonCount = ProtonCount,
         CarbonCount = CarbonCount,
         NucleusCount = NucleusCount,
-        Assignments = [.. Assignments],
-        Notes = [.. Notes],
+        Assignments = assignments ?? (IReadOnlyList<string>)[],
+        Notes = notes ?? (IReadOnlyList<string>)[],
         SourceOffset = Offset,
     };
 }

@@ -16,8 +16,15 @@ internal static class SignalNotes
     {
         "with", "by", "d2o", "solvent", "signal", "signals", "peak", "peaks", "residual", "water", "partially",
         "in", "the", "of", "and", "due", "to", "doubled", "not", "observed", "visible", "hdo", "cdcl3", "dmso-d6",
-        "form", "e", "z", "(e)", "(z)", "on", "addition",
+        "form", "e", "z", "(e)", "(z)", "on", "addition", "chcl3", "h2o", "dmso", "acetone", "isomer)",
     };
+
+    /// <summary>"3:1", "55:45" as in "rotamers 3:1".</summary>
+    private static bool IsRatio(string word)
+    {
+        var colon = word.IndexOf(':');
+        return colon > 0 && colon < word.Length - 1 && word.Remove(colon, 1).All(char.IsAsciiDigit);
+    }
 
     public static bool IsNote(string text)
     {
@@ -26,7 +33,7 @@ internal static class SignalNotes
         foreach (var word in words)
         {
             if (KeyWords.Contains(word)) hasKey = true;
-            else if (!Fillers.Contains(word)) return false;
+            else if (!Fillers.Contains(word) && !IsRatio(word)) return false;
         }
         return hasKey;
     }

@@ -16,7 +16,7 @@ internal static class SignalReader
         c.SkipSpaces();
         if (c.Current != '(')
         {
-            if (draft.Notes.Count == 0) c.Pos = afterShift;
+            if (!draft.HasNotes) c.Pos = afterShift;
             return draft;
         }
         return ReadDetails(c, draft, decimalComma, sink) ? draft : null;

@@ -69,6 +69,14 @@ public sealed class JcampReaderTests
         Assert.Equal([-62.8, -113.5], result.Spectra[0].Signals.Select(s => s.ShiftPpm!.Value));
     }
 
+    [Fact]
+    public void Read_TuplesOnTheVariableListLine_AreRead()
+    {
+        var result = JcampReader.Read("##TITLE= t\n##.OBSERVE NUCLEUS= ^1H\n##PEAKTABLE=(XY..XY) 7.26,10.0 2.05,30.0\n1.26,20.0\n##END=");
+        Assert.True(result.Succeeded, string.Join("; ", result.Problems.Select(p => p.Message)));
+        Assert.Equal([7.26, 2.05, 1.26], result.Spectra.Single().Signals.Select(s => s.ShiftPpm!.Value));
+    }
+
     public static TheoryData<string, int, int, string, string> BadInputs => new()
     {
         { "##TITLE= t\n##.OBSERVE NUCLEUS= ^1H\n##PEAK TABLE= (XY..XY)\n1.0, 2.0\n", 5, 1, "", JcampMessages.ExpectedEnd },
@@ -110,6 +118,15 @@ public sealed class JcampReaderTests
     {
         var result = JcampReader.Read("##TITLE= t\n##.OBSERVE NUCLEUS= ^15N\n##PEAK TABLE= (XY..XY)\n1.0, 2.0\n##END=");
         Assert.True(result.Succeeded);
-        Assert.Equal(JcampMessages.ExpectedNucleus, Assert.Single(result.Problems).Expected);
+        var problem = Assert.Single(result.Problems);
+        Assert.Equal((2, JcampMessages.ExpectedNucleus), (problem.Line, problem.Expected));
+    }
+
+    [Fact]
+    public void Read_MissingNucleus_WarnsOnTheTitleLine()
+    {
+        var result = JcampReader.Read("\n##TITLE= t\n##PEAK TABLE= (XY..XY)\n1.0, 2.0\n##END=");
+        var problem = Assert.Single(result.Problems);
+        Assert.Equal((2, JcampMessages.ExpectedNucleus, ProblemSeverity.Warning), (problem.Line, problem.Expected, problem.Severity));
     }
 }

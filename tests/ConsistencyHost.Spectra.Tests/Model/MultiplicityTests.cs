@@ -43,6 +43,7 @@ public sealed class MultiplicityTests
     [InlineData("m", false, null)]
     [InlineData("multiplet", false, null)]
     [InlineData("overlapped", false, null)]
+    [InlineData("br", false, null)]
     [InlineData("ABq", true, "ABq")]
     [InlineData("AB", true, "AB")]
     [InlineData("ABX", true, "ABX")]

@@ -40,3 +40,20 @@ public sealed class ReportedTextReaderHrmsTests
         Assert.Equal(text.IndexOf("HRMS", StringComparison.Ordinal), Assert.Single(result.Hrms).SourceOffset);
     }
 }
+
+public sealed class ReportedTextReaderOffsetTests
+{
+    // Common practice: two spectra in one experimental paragraph; offsets let the ELN highlight the text.
+    [Fact]
+    public void Read_SignalsAndSpectra_CarryTheirSourceOffsets()
+    {
+        const string text = "1H NMR (400 MHz, CDCl3) δ 7.31–7.24 (m, 5H), 4.12 (q, J = 7.1 Hz, 2H); 13C NMR (101 MHz, CDCl3) δ 171.1, 60.4.";
+        var result = ReportedTextReader.Read(text);
+        Assert.True(result.Succeeded);
+        Assert.Equal([0, text.IndexOf("13C", StringComparison.Ordinal)], result.Spectra.Select(s => s.SourceOffset!.Value));
+        Assert.Equal(
+            [text.IndexOf("7.31", StringComparison.Ordinal), text.IndexOf("4.12", StringComparison.Ordinal),
+             text.IndexOf("171.1", StringComparison.Ordinal), text.IndexOf("60.4", StringComparison.Ordinal)],
+            result.Spectra.SelectMany(s => s.Signals).Select(s => s.SourceOffset!.Value));
+    }
+}

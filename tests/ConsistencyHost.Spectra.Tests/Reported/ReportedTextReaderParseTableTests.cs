@@ -69,6 +69,7 @@ public sealed class ReportedTextReaderParseTableTests
         { Common, "1H NMR (400 MHz, CDCl3) δ 5.35 (d, 2JHF = 47.5 Hz, 2H)", "1H 400 CDCl3 | 5.35 d J2:47.5F n2" },
         { Common, "1H NMR (400 MHz, CDCl3) δ 7.02 (t, J = 8.7 Hz (H-F), 2H)", "1H 400 CDCl3 | 7.02 t J8.7F n2" },
         { Common, "1H NMR (400 MHz, CDCl3) δ 7.02 (dd, J = 8.0, ⁴J(H,F) = 5.5 Hz, 1H)", "1H 400 CDCl3 | 7.02 dd J8,4:5.5F n1" },
+        { Common, "1H NMR (400 MHz, CDCl3) δ 7.02 (dd, J(H2,H3) = 8.0 Hz, J = 2.0 Hz, 1H, H-2)", "1H 400 CDCl3 | 7.02 dd J8(H2,H3),2 n1 @H-2" },
         { Common, "1H NMR (400 MHz, CDCl3) δ 3.70 (ABq, JAB = 12.0 Hz, 2H)", "1H 400 CDCl3 | 3.7 ABq J12 n2" },
         // Multiplicities
         { Pmc4199947, "1H NMR (400 MHz, CDCl3) δ 5.02 (bs, 1H)", "1H 400 CDCl3 | 5.02 br s n1" },
@@ -101,6 +102,11 @@ public sealed class ReportedTextReaderParseTableTests
         // Notes
         { Common, "1H NMR (400 MHz, CDCl3) δ 5.10 (br s, 1H, exchangeable with D2O)", "1H 400 CDCl3 | 5.1 br s n1 !exchangeable with D2O" },
         { Common, "1H NMR (400 MHz, CDCl3) δ 3.41 (s, 3H, minor rotamer), 3.38 (s, 3H, major rotamer)", "1H 400 CDCl3 | 3.41 s n3 !minor rotamer ; 3.38 s n3 !major rotamer" },
+        { Common, "1H NMR (400 MHz, CDCl3) δ 3.41 (s, 3H, rotamers 3:1), 3.38 (s, 3H, signals doubled due to rotamers)", "1H 400 CDCl3 | 3.41 s n3 !rotamers 3:1 ; 3.38 s n3 !signals doubled due to rotamers" },
+        { Common, "1H NMR (400 MHz, CDCl3) δ 3.95 (AB quartet, J = 15.1 Hz, 2H)", "1H 400 CDCl3 | 3.95 AB quartet J15.1 n2" },
+        { Common, "1H NMR (400 MHz, CDCl3) δ 9.10 (br, 1H, NH), 1.42 (s, 9H, 3 × CH3)", "1H 400 CDCl3 | 9.1 br m n1 @NH ; 1.42 s n9 @3 × CH3" },
+        { Common, "13C NMR (101 MHz, CDCl3) δ 128.5 (2 x CH), 127.9 (2×CH)", "13C 101 CDCl3 | 128.5 @2 x CH ; 127.9 @2×CH" },
+        { Common, "1H NMR (400 MHz, CDCl3) δ 7.30–7.22 (m, 2H, overlapping with CHCl3)", "1H 400 CDCl3 | 7.22-7.3 m n2 !overlapping with CHCl3" },
         { Common, "1H NMR (400 MHz, CDCl3) δ 3.41* (s, 3H)", "1H 400 CDCl3 | 3.41 s n3 !*" },
         // Several spectra and HRMS in one text
         { Gottlieb, "1H NMR (300 MHz, CDCl3) δ 4.12 (q, J = 7 Hz, 2H), 2.05 (s, 3H), 1.26 (t, J = 7 Hz, 3H); 13C NMR (75 MHz, CDCl3) δ 171.36, 60.49, 21.04, 14.19.",

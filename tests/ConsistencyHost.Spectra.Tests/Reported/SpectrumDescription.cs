@@ -35,7 +35,7 @@ internal static class SpectrumDescription
     }
 
     private static string Of(Coupling j) =>
-        (j.BondCount is { } b ? b + ":" : "") + N(j.Hz) + (j.CoupledNucleus ?? "");
+        (j.BondCount is { } b ? b + ":" : "") + N(j.Hz) + (j.CoupledNucleus ?? "") + (j.PartnerLabel is { } p ? "(" + p + ")" : "");
 
     private static string N(double v) => v.ToString(CultureInfo.InvariantCulture);
 }
