@@ -20,6 +20,7 @@ internal static class CheckCommand
         ["--data"] = "--data",
         ["--nmr"] = "--data",
         ["--jcamp"] = "--jcamp",
+        ["--nmredata"] = "--nmredata",
         ["--formula"] = "--formula",
         ["--profile"] = "--profile",
         ["--id"] = "--id",
@@ -27,7 +28,7 @@ internal static class CheckCommand
     };
 
     public const string Usage =
-        "check [ENTRY.json] [--smiles TEXT | --molfile PATH] [--data TEXT]... [--jcamp PATH] [--formula F]\n" +
+        "check [ENTRY.json] [--smiles TEXT | --molfile PATH] [--data TEXT]... [--jcamp PATH] [--nmredata PATH] [--formula F]\n" +
         "      [--id ENTRY_ID] [--profile NAME] [--format text|json] [--plugins DIR] [--config FILE]";
 
     public static int Run(IReadOnlyList<string> raw, TextWriter stdout)
@@ -62,6 +63,7 @@ internal static class CheckCommand
             request.Spectra.Add(new SpectrumInput { JcampDx = ReadFile(jcamp, "--jcamp") });
         }
 
+        if (args.Value("--nmredata") is { } nmredata) request.NmredataRecord = ReadFile(nmredata, "--nmredata");
         if (args.Value("--formula") is { } formula) (request.Claims ??= new Claims()).Formula = formula;
         if (args.Value("--profile") is { } profile) request.Profile = profile;
         if (args.Value("--id") is { } id) request.EntryId = id;

@@ -15,6 +15,7 @@ public static class SubmissionMapper
         Structure = ToStructure(request.Structure),
         Spectra = [.. request.Spectra.Select(ToSpectrum)],
         ReportedText = [.. request.ReportedText],
+        NmredataRecord = request.NmredataRecord.Length > 0 ? request.NmredataRecord : null,
         Formula = request.Claims?.Formula,
         Hrms = request.Claims is null ? [] : [.. request.Claims.Hrms.Select(ToHrms)],
         Profile = request.Profile,

@@ -27,11 +27,20 @@ public sealed class EntryIntake(IntakeLimits limits)
             hrms.AddRange(read.Hrms);
         }
 
+        var structure = submission.Structure;
+        if (submission.NmredataRecord is { } nmredata)
+        {
+            CheckLength(nmredata, "nmredata_record");
+            var record = NmredataIntake.ReadOne(nmredata, "nmredata_record");
+            spectra.AddRange(record.Spectra);
+            structure ??= record.MolfileText.Length > 0 ? new StructureSource(StructureFormat.Molfile, record.MolfileText) : null;
+        }
+
         return new Entry
         {
             EntryId = submission.EntryId,
-            Structure = submission.Structure,
-            Molecule = submission.Structure is { } structure ? StructureIntake.Read(structure) : null,
+            Structure = structure,
+            Molecule = structure is not null ? StructureIntake.Read(structure) : null,
             Spectra = spectra,
             Claims = new EntryClaims
             {

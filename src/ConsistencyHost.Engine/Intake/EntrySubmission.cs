@@ -18,6 +18,9 @@ public sealed record EntrySubmission
     /// <summary>Free characterisation text blocks (NMR and HRMS lines).</summary>
     public IReadOnlyList<string> ReportedText { get; init; } = [];
 
+    /// <summary>One NMReDATA SD record; null when none.</summary>
+    public string? NmredataRecord { get; init; }
+
     /// <summary>The stated molecular formula; null when none.</summary>
     public string? Formula { get; init; }
 
