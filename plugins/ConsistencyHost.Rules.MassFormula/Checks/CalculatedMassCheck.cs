@@ -65,7 +65,7 @@ internal static class CalculatedMassCheck
 
     private static Finding ElectronMassOmitted(ClaimContext c, Ion ion) =>
         c.Finding(MassFormulaCodes.ElectronMassOmitted, Severity.Warning,
-                $"{c.Name}: the calculated value is {ion.Hill} without the electron mass ({MassText.Mz(ion.MzWithoutElectron)}); " +
+                $"{c.Name}: the calculated value is that of {ion.Hill} ({c.IonSource}) without the electron mass ({MassText.Mz(ion.MzWithoutElectron)}); " +
                 $"with it, m/z is {MassText.Mz(ion.Mz)}. An ion's mass is its atoms' masses {(ion.Charge > 0 ? "minus" : "plus")} one electron (0.000549 u) per charge.")
             .WithEvidence("expected_mz", MassText.Mz(ion.Mz))
             .WithEvidence("reported_mz", MassText.Reported(c.Claim.CalculatedMz, c.Claim.CalculatedDecimals))
@@ -74,7 +74,7 @@ internal static class CalculatedMassCheck
 
     private static Finding CalculatedMassMismatch(ClaimContext c, Ion ion) =>
         c.Finding(MassFormulaCodes.CalculatedMassMismatch, Severity.Error,
-                $"{c.Name}: m/z of {ion.Hill} is {MassText.Mz(ion.Mz)}; the reported calculated value differs by " +
+                $"{c.Name}: m/z of {ion.Hill} ({c.IonSource}) is {MassText.Mz(ion.Mz)}; the reported calculated value differs by " +
                 $"{MassText.MilliDaltons(c.Claim.CalculatedMz - ion.Mz)} mDa, more than rounding to {c.Claim.CalculatedDecimals} decimals explains " +
                 $"(tolerance {MassText.MilliDaltons(c.Tolerance)} mDa).")
             .WithEvidence("expected_mz", MassText.Mz(ion.Mz))

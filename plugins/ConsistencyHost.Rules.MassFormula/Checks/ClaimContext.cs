@@ -25,6 +25,11 @@ internal sealed record ClaimContext(
     public string Name => string.Create(CultureInfo.InvariantCulture,
         $"HRMS line {Index + 1} ({Claim.IonLabel ?? "no ion stated"}, calcd for {Claim.IonFormula} {MassText.Reported(Claim.CalculatedMz, Claim.CalculatedDecimals)})");
 
+    /// <summary>Where the expected ion comes from: "the structure (C8H10N4O2) as [M+H]+", or "the written formula".</summary>
+    public string IonSource => Molecule is not null && Ion.Label is not null
+        ? $"{Molecule.Description} as {Ion.Label.Canonical}"
+        : $"the written formula {Claim.IonFormula}";
+
     /// <summary>A finding located at this claim: its index, source offset and ion label as evidence.</summary>
     public Finding Finding(string code, Severity severity, string message) =>
         new Finding(code, severity, message)

@@ -52,7 +52,9 @@ internal sealed record Composition(ImmutableSortedDictionary<string, int> Counts
 
         if (charge != 0)
         {
-            text.Append(Math.Abs(charge).ToString(CultureInfo.InvariantCulture)).Append(charge > 0 ? '+' : '-');
+            // Sign first ("+2"): a leading magnitude would run into the last count ("O2" + "2+" reads as O22).
+            text.Append(charge > 0 ? '+' : '-');
+            if (Math.Abs(charge) > 1) text.Append(Math.Abs(charge).ToString(CultureInfo.InvariantCulture));
         }
 
         return MolecularFormula.Parse(text.ToString()).Formula?.Hill ?? text.ToString();
