@@ -36,6 +36,14 @@ public sealed class IonLabelTests(MassFormulaTestKit kit) : IClassFixture<MassFo
     }
 
     [Fact]
+    public void Check_ParenthesisedLabelInReportedText_ReadThroughToTheRule()
+    {
+        // Source: nmr-data-standards.md §7.3: caffeine [M+H]+ 195.087652, or 195.088201 with the electron omitted.
+        Assert.Empty(kit.Check(Caffeine, "HRMS (ESI) m/z: (M+H)+ calcd for C8H11N4O2 195.0877; found 195.0874."));
+        Assert.Equal("electron-mass-omitted", Assert.Single(kit.Check(Caffeine, "HRMS (ESI) m/z: (M+H)+ calcd for C8H11N4O2 195.0882.")).Code);
+    }
+
+    [Fact]
     public void CheckClaim_DimerSodiated_Recognised()
     {
         // Caffeine [2M+Na]+ = 2·194.080376 + 22.9897692820 − mₑ = 411.149972 (NIST masses, §7.1–7.3).
