@@ -43,6 +43,16 @@ public sealed class IonLabelTests(MassFormulaTestKit kit) : IClassFixture<MassFo
         Assert.Equal("electron-mass-omitted", Assert.Single(kit.Check(Caffeine, "HRMS (ESI) m/z: (M+H)+ calcd for C8H11N4O2 195.0882.")).Code);
     }
 
+    [Theory]
+    // N,N'-Dibenzylethylenediamine [M+2H]2+ = (240.162649 + 2·1.00782503223 − 2·mₑ)/2 = 121.088601 (NIST masses, §7.1–7.3).
+    [InlineData("[M+2H]2+")]
+    [InlineData("[M+2H]²⁺")]
+    [InlineData("[M+2H]+2")]
+    public void CheckClaim_DoublyChargedVariant_DividedByTwo(string label)
+    {
+        Assert.Empty(kit.CheckClaim(DibenzylEthylenediamine, Claim(label, "C16H22N2", "121.0886")));
+    }
+
     [Fact]
     public void CheckClaim_DimerSodiated_Recognised()
     {

@@ -82,7 +82,7 @@ internal static partial class IonLabelReader
                 case '⁻' or '−' or '–': sb.Append('-'); break;
                 case '(': sb.Append('['); break;
                 case ')': sb.Append(']'); break;
-                case >= '⁰' and <= '⁹' or '¹' or '²' or '³': sb.Append(SuperscriptDigit(ch)); break;
+                case '⁰' or '¹' or '²' or '³' or (>= '⁴' and <= '⁹'): sb.Append(SuperscriptDigit(ch)); break;
                 case var c when char.IsWhiteSpace(c): break;
                 default: sb.Append(ch); break;
             }
