@@ -90,13 +90,13 @@ internal static class HrmsReader
         }
     }
 
-    /// <summary>"[M + H]+", "[M+Na]⁺", "[M−H]−", "M+•" with blanks removed and superscript charges made plain.</summary>
+    /// <summary>"[M + H]+", "(M+H)+", "[M+Na]⁺", "[M−H]−", "M+•" with blanks removed and superscript charges made plain.</summary>
     private static string? ReadIonLabel(TextCursor c)
     {
         var start = c.Pos;
-        if (c.Current == '[')
+        if (c.Current is '[' or '(')
         {
-            var close = c.Text.IndexOf(']', c.Pos);
+            var close = c.Text.IndexOf(c.Current == '[' ? ']' : ')', c.Pos);
             if (close < 0) return null;
             c.Pos = close + 1;
         }

@@ -21,6 +21,8 @@ public sealed class ReportedTextReaderHrmsTests
     [InlineData("HRMS (ESI) m/z: [M + H]+ calcd for C10H14NO2 180.1019; found 180.1016.", "ESI", "[M+H]+", "C10H14NO2", 180.1019, 180.1016)]
     [InlineData("HRMS (APCI): m/z calc. for C10H14NO2 [M+H]+ 180.1019, found: 180.1022", "APCI", "[M+H]+", "C10H14NO2", 180.1019, 180.1022)]
     [InlineData("HRMS (ESI) calculated for C8H11N4O2 [M+H]⁺ 195.0877, found 195.0875.", "ESI", "[M+H]+", "C8H11N4O2", 195.0877, 195.0875)]
+    // Common practice: parentheses instead of brackets around the ion.
+    [InlineData("HRMS (ESI) m/z: (M+H)+ calcd for C8H11N4O2 195.0877; found 195.0875.", "ESI", "(M+H)+", "C8H11N4O2", 195.0877, 195.0875)]
     public void Read_HrmsVariant_GivesClaim(string text, string ionisation, string ion, string formula, double calcd, double found)
     {
         var result = ReportedTextReader.Read(text);
