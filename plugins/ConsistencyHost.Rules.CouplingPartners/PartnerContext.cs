@@ -32,22 +32,29 @@ internal sealed record PartnerContext(
         return k < 0 ? [] : assignment.ClassesBySignal[k];
     }
 
+    /// <summary>
+    /// The structure's hydrogen classes in a signal (a class split by slow exchange appears once, under its
+    /// source class).
+    /// </summary>
+    public IReadOnlyList<int> StructureClassesOf(int signal) =>
+        [.. ClassesOf(signal).Select(c => Interpretation!.Classes[c].Source).Where(c => c >= 0).Distinct()];
+
     /// <summary>The compound signals holding a class that couples (2J, 3J, 4J) to a class of <paramref name="signal"/>.</summary>
     public IReadOnlyList<int>? PartnerSignals(int signal)
     {
-        if (Equivalence is null || ClassesOf(signal) is not { Count: > 0 } own) return null;
+        if (Equivalence is null || StructureClassesOf(signal) is not { Count: > 0 } own) return null;
         var partners = own.SelectMany(c => Equivalence.HydrogenClasses[c].Geminal2J
                 .Concat(Equivalence.HydrogenClasses[c].Vicinal3J)
                 .Concat(Equivalence.HydrogenClasses[c].LongRange4J))
             .ToHashSet();
-        return [.. CompoundSignals.Where(s => s != signal && ClassesOf(s).Any(partners.Contains))];
+        return [.. CompoundSignals.Where(s => s != signal && StructureClassesOf(s).Any(partners.Contains))];
     }
 
     /// <summary>True when a class of the signal has 19F or 31P within three bonds.</summary>
     public bool HasHeteronuclearNeighbour(int signal) =>
         Equivalence is null
             ? true
-            : ClassesOf(signal).Any(c => Equivalence.HydrogenClasses[c].HeteronuclearNeighbours.Length > 0)
+            : StructureClassesOf(signal).Any(c => Equivalence.HydrogenClasses[c].HeteronuclearNeighbours.Length > 0)
               || (ClassesOf(signal).Count == 0 && Equivalence.HydrogenClasses.Any(h => h.HeteronuclearNeighbours.Length > 0));
 
     private int IndexInCompound(int signal)

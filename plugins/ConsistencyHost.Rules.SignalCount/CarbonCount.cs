@@ -1,5 +1,6 @@
 using System.Globalization;
-using ConsistencyHost.Chemistry.Perception.Symmetry;
+using ConsistencyHost.Sdk.Entries;
+using ConsistencyHost.Spectra.Analysis;
 using ConsistencyHost.Sdk.Findings;
 using ConsistencyHost.Spectra.Model;
 using ConsistencyHost.Spectra.Solvents;
@@ -9,9 +10,10 @@ namespace ConsistencyHost.Rules.SignalCount;
 /// <summary>The 13C half of the signal-count rule.</summary>
 internal static class CarbonCount
 {
-    public static IEnumerable<Finding> Check(Spectrum spectrum, int spectrumIndex, NmrEquivalence equivalence, SignalCountOptions options)
+    public static IEnumerable<Finding> Check(Spectrum spectrum, int spectrumIndex, StructurePerception perception, SignalCountOptions options)
     {
-        var (min, max) = (equivalence.Expected13C.Min, equivalence.Expected13C.Max);
+        var expected = ExpectedSignals.Carbon(perception.Molecule, perception.Equivalence);
+        var (min, max) = (expected.Min, expected.Max);
         var lines = CountedLines(spectrum, max);
         if (lines.Count > max)
         {

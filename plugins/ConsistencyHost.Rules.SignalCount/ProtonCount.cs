@@ -1,7 +1,7 @@
 using System.Globalization;
-using ConsistencyHost.Chemistry.Perception.Symmetry;
 using ConsistencyHost.Sdk.Entries;
 using ConsistencyHost.Sdk.Findings;
+using ConsistencyHost.Spectra.Analysis;
 using ConsistencyHost.Spectra.Analysis.Interpretation;
 using ConsistencyHost.Spectra.Model;
 
@@ -10,11 +10,12 @@ namespace ConsistencyHost.Rules.SignalCount;
 /// <summary>The 1H half of the signal-count rule.</summary>
 internal static class ProtonCount
 {
-    public static IEnumerable<Finding> Check(IEntryView entry, int spectrumIndex, NmrEquivalence equivalence)
+    public static IEnumerable<Finding> Check(IEntryView entry, int spectrumIndex, StructurePerception perception)
     {
         var interpretation = entry.Analysis.Protons(spectrumIndex)!;
         var spectrum = entry.Spectra[spectrumIndex];
-        var (min, max) = ExpectedRange(equivalence, spectrum.Solvent);
+        var expected = ExpectedSignals.Proton(perception.Molecule, perception.Equivalence, spectrum.Solvent);
+        var (min, max) = (expected.Min, expected.Max);
         var observed = interpretation.CompoundSignals.Count;
         if (observed > max)
         {
@@ -27,18 +28,6 @@ internal static class ProtonCount
                 { Peaks = [PeakRef.WholeSpectrum(spectrumIndex)] }
                 .WithEvidence("expected_min", min).WithEvidence("expected_max", max).WithEvidence("observed", observed);
         }
-    }
-
-    /// <summary>In D2O and CD3OD exchangeable protons never appear, so they cannot add signals.</summary>
-    private static (int Min, int Max) ExpectedRange(NmrEquivalence equivalence, string? solvent)
-    {
-        var max = equivalence.Expected1H.Max;
-        if (LabileExchange.RemovesExchangeableProtons(solvent))
-        {
-            max -= equivalence.HydrogenClasses.Count(c => c.IsExchangeable);
-        }
-
-        return (Math.Min(equivalence.Expected1H.Min, max), max);
     }
 
     private static Finding TooMany(ProtonInterpretation interpretation, Spectrum spectrum, int spectrumIndex, int min, int max)

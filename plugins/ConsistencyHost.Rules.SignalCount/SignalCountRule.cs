@@ -1,4 +1,3 @@
-using ConsistencyHost.Chemistry.Perception.Symmetry;
 using ConsistencyHost.Sdk.Entries;
 using ConsistencyHost.Sdk.Findings;
 using ConsistencyHost.Sdk.Rules;
@@ -29,8 +28,8 @@ public sealed class SignalCountRule : Rule<SignalCountOptions>
             var spectrum = entry.Spectra[i];
             var findings = spectrum.Nucleus switch
             {
-                Nucleus.H1 when options.CheckProton => ProtonCount.Check(entry, i, perception.Equivalence),
-                Nucleus.C13 when options.CheckCarbon => CarbonCount.Check(spectrum, i, perception.Equivalence, options),
+                Nucleus.H1 when options.CheckProton => ProtonCount.Check(entry, i, perception),
+                Nucleus.C13 when options.CheckCarbon => CarbonCount.Check(spectrum, i, perception, options),
                 _ => [],
             };
             foreach (var finding in findings)

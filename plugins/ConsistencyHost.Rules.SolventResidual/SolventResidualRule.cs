@@ -2,6 +2,7 @@ using System.Globalization;
 using ConsistencyHost.Sdk.Entries;
 using ConsistencyHost.Sdk.Findings;
 using ConsistencyHost.Sdk.Rules;
+using ConsistencyHost.Spectra.Analysis;
 using ConsistencyHost.Spectra.Analysis.Interpretation;
 using ConsistencyHost.Spectra.Model;
 using ConsistencyHost.Spectra.Solvents;
@@ -98,7 +99,7 @@ public sealed class SolventResidualRule : Rule<SolventResidualOptions>
     {
         if (entry.Perception is not { } perception) yield break;
         var counted = spectrum.Signals.Count(s => !s.Notes.Any(n => n.Contains("minor", StringComparison.OrdinalIgnoreCase)));
-        if (counted <= perception.Equivalence.Expected13C.Max) yield break;
+        if (counted <= ExpectedSignals.Carbon(perception.Molecule, perception.Equivalence).Max) yield break;
         foreach (var match in new ResidualMatcher().Match(spectrum).Matches.Where(m => m.Kind == ResidualMatchKind.ResidualSolvent))
         {
             yield return Residual(spectrum, index, match.SignalIndex, match, "the list has more lines than the structure has carbon environments");
