@@ -1,3 +1,4 @@
+using ConsistencyHost.Chemistry.Model;
 using ConsistencyHost.Chemistry.Perception.Symmetry;
 using ConsistencyHost.Sdk.Entries;
 using ConsistencyHost.Spectra.Analysis.Interpretation;
@@ -14,14 +15,15 @@ internal sealed record PartnerContext(
     int SpectrumIndex,
     IReadOnlyList<int> CompoundSignals,
     ProtonInterpretation? Interpretation,
-    NmrEquivalence? Equivalence)
+    NmrEquivalence? Equivalence,
+    Molecule? Molecule)
 {
     public static PartnerContext Create(IEntryView entry, int spectrumIndex)
     {
         var spectrum = entry.Spectra[spectrumIndex];
         var interpretation = entry.Analysis.Protons(spectrumIndex);
         var compound = interpretation?.CompoundSignals ?? [.. Enumerable.Range(0, spectrum.Signals.Count)];
-        return new PartnerContext(spectrum, spectrumIndex, compound, interpretation, entry.Perception?.Equivalence);
+        return new PartnerContext(spectrum, spectrumIndex, compound, interpretation, entry.Perception?.Equivalence, entry.Molecule);
     }
 
     /// <summary>The classes the best assignment put in a signal; empty when there is no assignment.</summary>
@@ -50,12 +52,13 @@ internal sealed record PartnerContext(
         return [.. CompoundSignals.Where(s => s != signal && StructureClassesOf(s).Any(partners.Contains))];
     }
 
-    /// <summary>True when a class of the signal has 19F or 31P within three bonds.</summary>
-    public bool HasHeteronuclearNeighbour(int signal) =>
-        Equivalence is null
-            ? true
-            : StructureClassesOf(signal).Any(c => Equivalence.HydrogenClasses[c].HeteronuclearNeighbours.Length > 0)
-              || (ClassesOf(signal).Count == 0 && Equivalence.HydrogenClasses.Any(h => h.HeteronuclearNeighbours.Length > 0));
+    /// <summary>
+    /// True when a signal may carry a coupling to 19F or 31P. Any F or P in the structure counts: H–F
+    /// couplings over four and five bonds (4J ≈ 4–6 Hz to a meta proton of a fluoroarene) are routinely resolved
+    /// (common practice), so limiting this to three bonds would raise false alarms.
+    /// </summary>
+    public bool MayCoupleToHeteronucleus() =>
+        Molecule is null || Molecule.Atoms.Any(a => a.AtomicNumber is 9 or 15);
 
     private int IndexInCompound(int signal)
     {

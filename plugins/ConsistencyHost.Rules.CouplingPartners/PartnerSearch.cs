@@ -34,7 +34,7 @@ internal static class PartnerSearch
         if (context.CompoundSignals.Where(s => s != a).Any(s => Carries(s) || Unresolved(signals[s]))) return true;
 
         // A J that no proton partner carries may be to 19F or 31P, or within an AA'XX' multiplet itself.
-        return context.HasHeteronuclearNeighbour(a);
+        return context.MayCoupleToHeteronucleus();
     }
 
     /// <summary>A partner whose J cannot be read: m, broad, apparent, second-order, or given without J.</summary>
