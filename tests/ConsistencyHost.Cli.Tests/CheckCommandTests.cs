@@ -25,7 +25,7 @@ public sealed class CheckCommandTests
 
         Assert.Equal(0, exit);
         using var json = JsonDocument.Parse(stdout);
-        var finding = json.RootElement.GetProperty("findings").EnumerateArray().First();
+        var finding = json.RootElement.GetProperty("findings").EnumerateArray().First(f => f.GetProperty("ruleId").GetString() == "spectrum-metadata");
         Assert.Equal("AIS-LQ-0422", json.RootElement.GetProperty("entryId").GetString());
         Assert.Equal("spectrum-metadata", finding.GetProperty("ruleId").GetString());
         Assert.Equal("solvent-not-stated", finding.GetProperty("code").GetString());
