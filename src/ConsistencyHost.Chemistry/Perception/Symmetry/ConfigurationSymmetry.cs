@@ -11,9 +11,9 @@ internal sealed record ConfigurationSymmetry(int[] Orbit, bool[] SplitHydrogens)
     public static ConfigurationSymmetry Compute(SymmetryContext ctx, IReadOnlyList<TetrahedralElement> tetra, IReadOnlyList<DoubleBondElement> doubles)
     {
         var action = new StereoAction(ctx.Molecule.AtomCount, tetra, doubles);
-        var cells = ctx.Refiner.Initial(action.Colours());
+        var cells = ctx.IsRigid ? ctx.Cells : ctx.Refiner.Initial(action.Colours());
         bool IsSymmetry(int[] s) => action.Classify(s) != SymmetryKind.None;
-        var orbit = OrbitFinder.Orbits(ctx.Search, cells, IsSymmetry);
+        var orbit = ctx.IsRigid ? Identity(cells.Length) : OrbitFinder.Orbits(ctx.Search, cells, IsSymmetry);
         var split = new bool[ctx.Molecule.AtomCount];
         for (var v = 0; v < split.Length; v++)
         {
@@ -26,6 +26,17 @@ internal sealed record ConfigurationSymmetry(int[] Orbit, bool[] SplitHydrogens)
         }
 
         return new ConfigurationSymmetry(orbit, split);
+    }
+
+    private static int[] Identity(int n)
+    {
+        var orbit = new int[n];
+        for (var i = 0; i < n; i++)
+        {
+            orbit[i] = i;
+        }
+
+        return orbit;
     }
 
     /// <summary>Are the two H of <paramref name="v"/> diastereotopic? (see nmr-methods.md §2.2 and docs/chemistry.md)</summary>

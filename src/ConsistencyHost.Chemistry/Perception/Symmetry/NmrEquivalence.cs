@@ -47,6 +47,10 @@ public sealed class NmrEquivalence
     /// <summary>Expected number of 13C signals.</summary>
     public SignalCountRange Expected13C { get; }
 
+    /// <summary>False when an automorphism search ran out of its node budget (highly symmetric inputs such as long
+    /// perfluoroalkyl chains); classes may then be split more finely than the true symmetry allows.</summary>
+    public bool IsExact { get; private init; } = true;
+
     /// <summary>Number of relative configurations evaluated (1 when all stereo is specified or absent).</summary>
     public int ConfigurationsConsidered { get; }
 
@@ -56,20 +60,28 @@ public sealed class NmrEquivalence
         ArgumentNullException.ThrowIfNull(molecule);
         var ctx = SymmetryContext.Create(molecule);
         var constitutionalOrbit = OrbitFinder.Orbits(ctx.Search, ctx.Cells, null);
+        var constitutional = new ConstitutionalClasses(constitutionalOrbit, !ctx.Search.BudgetExceeded);
         var (tetra, doubles) = StereoCandidates.Find(ctx);
         var stats = new List<ConfigurationStats>();
         foreach (var (t, d) in StereoEnumeration.Configurations(tetra, doubles))
         {
             stats.Add(ConfigurationStats.Of(molecule, ConfigurationSymmetry.Compute(ctx, t, d), constitutionalOrbit));
+            if (ctx.IsRigid)
+            {
+                break; // a trivial automorphism group gives every configuration the same classes
+            }
         }
 
         var best = stats.MaxBy(s => s.HydrogenClassCount)!;
         var hydrogens = CouplingPartners.Attach(molecule, ctx.Aromaticity, HydrogenClassBuilder.Build(molecule, best.Symmetry));
         var carbons = CarbonClasses(molecule, best.Symmetry.Orbit);
         var unspecified = StereoEnumeration.UnspecifiedCount(tetra, doubles);
-        var constitutional = new ConstitutionalClasses(constitutionalOrbit, !ctx.Search.BudgetExceeded);
+        var exact = !ctx.Search.BudgetExceeded;
         return new NmrEquivalence(hydrogens, carbons, constitutional,
-            SignalCountRanges.Hydrogen(stats, unspecified), SignalCountRanges.Carbon(stats, unspecified), stats.Count);
+            SignalCountRanges.Hydrogen(stats, unspecified, ctx.IsRigid, exact), SignalCountRanges.Carbon(stats, unspecified, ctx.IsRigid, exact), stats.Count)
+        {
+            IsExact = exact,
+        };
     }
 
     private static ImmutableArray<ImmutableArray<int>> CarbonClasses(Molecule m, int[] orbit)
