@@ -28,7 +28,7 @@ internal static class SignalCountRanges
 
         AddConfigurationReason(reasons, stats, rigid ? 0 : unspecified, s => s.HydrogenClassCount);
         AddExactnessReason(reasons, exact);
-        return new SignalCountRange(Math.Max(min, stats.Count == 0 ? 0 : 1), max, reasons);
+        return new SignalCountRange(Math.Clamp(min, 0, max), max, reasons);
     }
 
     public static SignalCountRange Carbon(List<ConfigurationStats> stats, int unspecified, bool rigid, bool exact)
