@@ -41,6 +41,9 @@ internal sealed class StereoAction
         }
     }
 
+    /// <summary>True when at least one tetrahedral element exists (otherwise every automorphism is also reflection-like).</summary>
+    public bool HasTetrahedral => tetra.Count > 0;
+
     /// <summary>Extra vertex colours so refinement keeps stereo atoms apart from others (never splits an orbit).</summary>
     public ulong[] Colours()
     {

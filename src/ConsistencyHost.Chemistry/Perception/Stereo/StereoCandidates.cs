@@ -48,6 +48,22 @@ internal static class StereoCandidates
         return (tetra, DoubleBondCandidates.Find(ctx));
     }
 
+    private static bool AllDistinct(int[] cells, ReadOnlySpan<int> atoms)
+    {
+        for (var i = 0; i < atoms.Length; i++)
+        {
+            for (var j = i + 1; j < atoms.Length; j++)
+            {
+                if (cells[atoms[i]] == cells[atoms[j]])
+                {
+                    return false;
+                }
+            }
+        }
+
+        return true;
+    }
+
     private static int[] Slots(Molecule m, int c)
     {
         var n = m.Neighbours(c);
@@ -71,8 +87,9 @@ internal static class StereoCandidates
             return (0, (-1, -1));
         }
 
-        var cells = ctx.Refiner.Individualise(ctx.Cells, c);
         var n = m.Neighbours(c);
+        // Refinement only splits cells, so ligands already apart in the equitable partition stay apart.
+        var cells = AllDistinct(ctx.Cells, n) ? ctx.Cells : ctx.Refiner.Individualise(ctx.Cells, c);
         var equal = new List<(int, int)>();
         for (var i = 0; i < n.Length; i++)
         {

@@ -13,7 +13,8 @@ internal sealed record ConfigurationSymmetry(int[] Orbit, bool[] SplitHydrogens)
         var action = new StereoAction(ctx.Molecule.AtomCount, tetra, doubles);
         var cells = ctx.IsRigid ? ctx.Cells : ctx.Refiner.Initial(action.Colours());
         bool IsSymmetry(int[] s) => action.Classify(s) != SymmetryKind.None;
-        var orbit = ctx.IsRigid ? Identity(cells.Length) : OrbitFinder.Orbits(ctx.Search, cells, IsSymmetry);
+        var discrete = PartitionRefiner.CountCells(cells) == cells.Length;
+        var orbit = discrete ? Identity(cells.Length) : OrbitFinder.Orbits(ctx.Search, cells, IsSymmetry);
         var split = new bool[ctx.Molecule.AtomCount];
         for (var v = 0; v < split.Length; v++)
         {
@@ -65,9 +66,24 @@ internal sealed record ConfigurationSymmetry(int[] Orbit, bool[] SplitHydrogens)
 
     /// <summary>A CH2 with ligands a, b: its H are exchanged by a rotation swapping a and b, or by a reflection
     /// fixing both (the mirror plane through a, v, b).</summary>
-    private static bool Sp3PairExchanged(SymmetryContext ctx, StereoAction action, int[] cells, int v, int a, int b) =>
-        ctx.Search.Find(cells, [v, a], [v, b], s => (action.Classify(s) & SymmetryKind.Rotation) != 0) is not null
-        || ctx.Search.Find(cells, [v, a], [v, a], s => (action.Classify(s) & SymmetryKind.Reflection) != 0) is not null;
+    /// <remarks>Shortcuts: with no tetrahedral element the identity is reflection-like; a and b in different
+    /// cells cannot be swapped; with a discrete partition the identity is the only symmetry.</remarks>
+    private static bool Sp3PairExchanged(SymmetryContext ctx, StereoAction action, int[] cells, int v, int a, int b)
+    {
+        if (!action.HasTetrahedral)
+        {
+            return true;
+        }
+
+        var discrete = PartitionRefiner.CountCells(cells) == cells.Length;
+        if (!discrete && cells[a] == cells[b]
+            && ctx.Search.Find(cells, [v, a], [v, b], s => (action.Classify(s) & SymmetryKind.Rotation) != 0) is not null)
+        {
+            return true;
+        }
+
+        return !discrete && ctx.Search.Find(cells, [v, a], [v, a], s => (action.Classify(s) & SymmetryKind.Reflection) != 0) is not null;
+    }
 
     /// <summary>=CH2 on w: its H are exchanged only when a symmetry fixing the C=C swaps w's two other ligands.</summary>
     private static bool TerminalAlkenePairExchanged(SymmetryContext ctx, StereoAction action, int[] cells, int v, int w)
