@@ -10,10 +10,12 @@ namespace ConsistencyHost.Chemistry.Perception.Symmetry;
 internal sealed class AutomorphismSearch
 {
     private const int NodeBudget = 20_000;
+    private const int ConditionalNodeBudget = 4_000;
     private readonly ColouredGraph graph;
     private readonly PartitionRefiner refiner;
     private Func<int[], bool> accept = _ => true;
     private int nodes;
+    private int budget = NodeBudget;
 
     public AutomorphismSearch(ColouredGraph graph, PartitionRefiner refiner)
     {
@@ -28,6 +30,7 @@ internal sealed class AutomorphismSearch
     public int[]? Find(int[] start, IReadOnlyList<int> from, IReadOnlyList<int> to, Func<int[], bool>? condition = null)
     {
         accept = condition ?? (_ => true);
+        budget = condition is null ? NodeBudget : ConditionalNodeBudget;
         nodes = 0;
         var a = start;
         var b = start;
@@ -51,7 +54,7 @@ internal sealed class AutomorphismSearch
 
     private int[]? Search(int[] a, int[] b)
     {
-        if (++nodes > NodeBudget)
+        if (++nodes > budget)
         {
             BudgetExceeded = true;
             return null;

@@ -62,13 +62,14 @@ public sealed class NmrEquivalence
         var constitutionalOrbit = OrbitFinder.Orbits(ctx.Search, ctx.Cells, null);
         var constitutional = new ConstitutionalClasses(constitutionalOrbit, !ctx.Search.BudgetExceeded);
         var (tetra, doubles) = StereoCandidates.Find(ctx);
+        var independent = ctx.IsRigid || StereoElementsFixed(constitutionalOrbit, tetra, doubles);
         var stats = new List<ConfigurationStats>();
         foreach (var (t, d) in StereoEnumeration.Configurations(tetra, doubles))
         {
             stats.Add(ConfigurationStats.Of(molecule, ConfigurationSymmetry.Compute(ctx, t, d), constitutionalOrbit));
-            if (ctx.IsRigid)
+            if (independent)
             {
-                break; // a trivial automorphism group gives every configuration the same classes
+                break; // no automorphism moves a stereo element: every configuration gives the same classes
             }
         }
 
@@ -78,10 +79,26 @@ public sealed class NmrEquivalence
         var unspecified = StereoEnumeration.UnspecifiedCount(tetra, doubles);
         var exact = !ctx.Search.BudgetExceeded;
         return new NmrEquivalence(hydrogens, carbons, constitutional,
-            SignalCountRanges.Hydrogen(stats, unspecified, ctx.IsRigid, exact), SignalCountRanges.Carbon(stats, unspecified, ctx.IsRigid, exact), stats.Count)
+            SignalCountRanges.Hydrogen(stats, unspecified, independent, exact), SignalCountRanges.Carbon(stats, unspecified, independent, exact), stats.Count)
         {
             IsExact = exact,
         };
+    }
+
+    /// <summary>True when every atom of every stereo element (centres, their neighbours, double-bond ends and
+    /// references) is alone in its constitutional orbit: then every automorphism fixes them all, acts on every
+    /// parity as the identity, and the configuration cannot change the classes.</summary>
+    private static bool StereoElementsFixed(int[] orbit, List<TetrahedralElement> tetra, List<DoubleBondElement> doubles)
+    {
+        var size = new int[orbit.Length];
+        foreach (var o in orbit)
+        {
+            size[o]++;
+        }
+
+        bool Alone(int atom) => atom < 0 || size[orbit[atom]] == 1;
+        return tetra.TrueForAll(t => Alone(t.Centre) && Array.TrueForAll(t.Neighbours, Alone))
+            && doubles.TrueForAll(d => Alone(d.Begin) && Alone(d.End) && Alone(d.BeginReference) && Alone(d.EndReference));
     }
 
     private static ImmutableArray<ImmutableArray<int>> CarbonClasses(Molecule m, int[] orbit)
