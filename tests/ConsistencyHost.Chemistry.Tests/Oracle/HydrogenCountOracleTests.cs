@@ -28,7 +28,7 @@ public sealed class HydrogenCountOracleTests
             var c = e.CarbonClasses13C.Sum(x => x.Length);
             if (h != rdkit.Counts.GetValueOrDefault("H") || c != rdkit.Counts.GetValueOrDefault("C")
                 || e.Expected1H.Min > e.Expected1H.Max || e.Expected13C.Min > e.Expected13C.Max
-                || e.Expected1H.Max != e.HydrogenClasses.Length)
+                || e.Expected1H.Max < e.HydrogenClasses.Length)
             {
                 problems.Add($"{rows[i].Name}: H {h}, C {c}, ranges {e.Expected1H} {e.Expected13C}");
             }

@@ -8,7 +8,8 @@ namespace ConsistencyHost.Chemistry.Perception.Symmetry;
 /// <param name="SplitHydrogens">Per atom: true when its two H are diastereotopic (two classes).</param>
 internal sealed record ConfigurationSymmetry(int[] Orbit, bool[] SplitHydrogens)
 {
-    public static ConfigurationSymmetry Compute(SymmetryContext ctx, IReadOnlyList<TetrahedralElement> tetra, IReadOnlyList<DoubleBondElement> doubles)
+    public static ConfigurationSymmetry Compute(
+        SymmetryContext ctx, IReadOnlyList<TetrahedralElement> tetra, IReadOnlyList<DoubleBondElement> doubles, ISet<int>? splitNitrogens = null)
     {
         var action = new StereoAction(ctx.Molecule.AtomCount, tetra, doubles);
         var cells = ctx.IsRigid ? ctx.Cells : ctx.Refiner.Initial(action.Colours());
@@ -18,7 +19,7 @@ internal sealed record ConfigurationSymmetry(int[] Orbit, bool[] SplitHydrogens)
         var split = new bool[ctx.Molecule.AtomCount];
         for (var v = 0; v < split.Length; v++)
         {
-            split[v] = orbit[v] == v && IsSplit(ctx, action, cells, v);
+            split[v] = orbit[v] == v && (splitNitrogens?.Contains(v) == true || IsSplit(ctx, action, cells, v));
         }
 
         for (var v = 0; v < split.Length; v++)

@@ -64,9 +64,11 @@ public sealed class NmrEquivalence
         var (tetra, doubles) = StereoCandidates.Find(ctx);
         var independent = ctx.IsRigid || StereoElementsFixed(constitutionalOrbit, tetra, doubles);
         var stats = new List<ConfigurationStats>();
+        var elements = new List<(List<TetrahedralElement>, List<DoubleBondElement>)>();
         foreach (var (t, d) in StereoEnumeration.Configurations(tetra, doubles))
         {
             stats.Add(ConfigurationStats.Of(molecule, ConfigurationSymmetry.Compute(ctx, t, d), constitutionalOrbit));
+            elements.Add((t, d));
             if (independent)
             {
                 break; // no automorphism moves a stereo element: every configuration gives the same classes
@@ -74,15 +76,30 @@ public sealed class NmrEquivalence
         }
 
         var best = stats.MaxBy(s => s.HydrogenClassCount)!;
+        var slow = SlowRotation(ctx, elements[stats.IndexOf(best)], constitutionalOrbit);
         var hydrogens = CouplingPartners.Attach(molecule, ctx.Aromaticity, HydrogenClassBuilder.Build(molecule, best.Symmetry));
         var carbons = CarbonClasses(molecule, best.Symmetry.Orbit);
         var unspecified = StereoEnumeration.UnspecifiedCount(tetra, doubles);
         var exact = !ctx.Search.BudgetExceeded;
         return new NmrEquivalence(hydrogens, carbons, constitutional,
-            SignalCountRanges.Hydrogen(stats, unspecified, independent, exact), SignalCountRanges.Carbon(stats, unspecified, independent, exact), stats.Count)
+            SignalCountRanges.Hydrogen(stats, unspecified, independent, exact, slow), SignalCountRanges.Carbon(stats, unspecified, independent, exact, slow), stats.Count)
         {
             IsExact = exact,
         };
+    }
+
+    /// <summary>The upper-bound configuration with slow amide C–N rotation, or null when there is no such bond.</summary>
+    private static (ConfigurationStats Stats, int Bonds)? SlowRotation(
+        SymmetryContext ctx, (List<TetrahedralElement> Tetra, List<DoubleBondElement> Doubles) config, int[] constitutionalOrbit)
+    {
+        var (amides, nitrogens) = AmideRotation.Find(ctx);
+        if (amides.Count == 0 && nitrogens.Count == 0)
+        {
+            return null;
+        }
+
+        var symmetry = ConfigurationSymmetry.Compute(ctx, config.Tetra, [.. config.Doubles, .. amides], nitrogens);
+        return (ConfigurationStats.Of(ctx.Molecule, symmetry, constitutionalOrbit), amides.Count + nitrogens.Count);
     }
 
     /// <summary>True when every atom of every stereo element (centres, their neighbours, double-bond ends and
