@@ -56,6 +56,17 @@ public sealed class SmilesReaderGraphTests
     }
 
     [Theory]
+    [InlineData("[H][C@@](F)(Cl)Br", "[C@@H](F)(Cl)Br")] // OpenSMILES: an explicit [H] neighbour counts in written order
+    [InlineData("F[C@@]([H])(Cl)Br", "F[C@@H](Cl)Br")]
+    [InlineData("[H]/C(F)=C/F", "C(/F)=C/F")] // H below, far F above, so the two F are cis; the folded H reference moves to F
+    public void Read_ExplicitHydrogenNeighbour_KeepsConfiguration(string withH, string withoutH)
+    {
+        var a = SmilesReader.Read(withH).Value!;
+        var b = SmilesReader.Read(withoutH).Value!;
+        Assert.Null(TestSupport.GraphAssert.Difference(b, a, TestSupport.GraphAssert.Identity(a.AtomCount)));
+    }
+
+    [Theory]
     [InlineData("F/C=C/F", Model.DoubleBondConfiguration.Trans)]
     [InlineData("F/C=C\\F", Model.DoubleBondConfiguration.Cis)]
     [InlineData("F\\C=C/F", Model.DoubleBondConfiguration.Cis)]

@@ -14,6 +14,7 @@ internal sealed class AutomorphismSearch
     private readonly ColouredGraph graph;
     private readonly PartitionRefiner refiner;
     private Func<int[], bool> accept = _ => true;
+    private readonly int[] scratch;
     private int nodes;
     private int budget = NodeBudget;
 
@@ -21,6 +22,7 @@ internal sealed class AutomorphismSearch
     {
         this.graph = graph;
         this.refiner = refiner;
+        scratch = new int[graph.Count + 1];
     }
 
     /// <summary>True when some search ran out of budget (the answer "not found" is then not a proof).</summary>
@@ -91,9 +93,10 @@ internal sealed class AutomorphismSearch
     }
 
     /// <summary>First cell (lowest number) with more than one vertex, and its first vertex; -1 when discrete.</summary>
-    private static int TargetCell(int[] cells, out int first)
+    private int TargetCell(int[] cells, out int first)
     {
-        var size = new int[cells.Length];
+        var size = scratch;
+        Array.Clear(size);
         foreach (var c in cells)
         {
             size[c]++;
@@ -118,9 +121,10 @@ internal sealed class AutomorphismSearch
         return target;
     }
 
-    private static bool Compatible(int[] a, int[] b)
+    private bool Compatible(int[] a, int[] b)
     {
-        var count = new int[a.Length + 1];
+        var count = scratch;
+        Array.Clear(count);
         for (var v = 0; v < a.Length; v++)
         {
             count[a[v]]++;
