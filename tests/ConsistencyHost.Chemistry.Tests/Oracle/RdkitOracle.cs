@@ -14,6 +14,9 @@ internal static class RdkitOracle
 
     public static (IReadOnlyList<OracleRow> Rows, string? Error) Rows => Cached.Value;
 
+    /// <summary>Output lines of rdkit_topicity.py (probe substitution) for a .smi file.</summary>
+    public static (string Text, string? Error) Topicity(string smiPath) => ExecuteScript("rdkit_topicity.py", smiPath);
+
     /// <summary>Committed stereo cases (the NCI set carries no configurations).</summary>
     public static string StereoCases => Path.Combine(AppContext.BaseDirectory, "Oracle", "stereo_cases.smi");
 
@@ -38,14 +41,16 @@ internal static class RdkitOracle
         return (rows, null);
     }
 
-    private static (string Text, string? Error) Execute(params string[] arguments)
+    private static (string Text, string? Error) Execute(params string[] arguments) => ExecuteScript("rdkit_oracle.py", arguments);
+
+    private static (string Text, string? Error) ExecuteScript(string scriptName, params string[] arguments)
     {
         if (!File.Exists(Python) || !File.Exists(Nci5K))
         {
             return (string.Empty, $"RDKit oracle needs {Python} and {Nci5K}; install python3-rdkit and rdkit-data (Debian).");
         }
 
-        var script = Path.Combine(AppContext.BaseDirectory, "Oracle", "rdkit_oracle.py");
+        var script = Path.Combine(AppContext.BaseDirectory, "Oracle", scriptName);
         var info = new ProcessStartInfo(Python, [script, .. arguments])
         {
             RedirectStandardOutput = true,
