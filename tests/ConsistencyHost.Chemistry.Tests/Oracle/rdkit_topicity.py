@@ -6,11 +6,19 @@ re-assign stereo from 3D and compare canonical isomeric SMILES: identical → ho
 inverting every tetrahedral centre → enantiotopic; otherwise diastereotopic.
 Output per molecule: name, SMILES (non-canonical, atom order as written), then position:verdict pairs where
 position is the atom's place in that SMILES and verdict is E (equivalent: homotopic or enantiotopic) or D.
+A fourth column does the same for carbons: every carbon of each constitutional class (CanonicalRankAtoms
+without chirality) is labelled 13C in turn and grouped by its canonical (or mirrored) SMILES; written as
+"p q r:sizes" with the sub-class sizes joined by '+'. Positions count non-hydrogen atoms only (RDKit keeps an
+[H] that carries double-bond stereo; our reader folds it).
 """
 import sys
 
 from rdkit import Chem, RDLogger
 from rdkit.Chem import AllChem
+
+
+def is_plain_hydrogen(atom):
+    return atom.GetAtomicNum() == 1 and atom.GetIsotope() == 0
 
 
 def canonical(mol):
@@ -47,6 +55,34 @@ def verdicts(mh):
     return result
 
 
+def carbon_partitions(mh):
+    """Per constitutional class of carbons: members and the sizes of their stereo-aware sub-classes. Sizes, not
+    pairings, are compared: which of two diastereotopic methyls on one CH is which is arbitrary."""
+    heavy_ranks = list(Chem.CanonicalRankAtoms(mh, breakTies=False, includeChirality=False))
+    classes = {}
+    for atom in mh.GetAtoms():
+        if atom.GetAtomicNum() == 6:
+            classes.setdefault(heavy_ranks[atom.GetIdx()], []).append(atom.GetIdx())
+    result = []
+    for members in classes.values():
+        if len(members) < 2:
+            continue
+        groups = {}
+        for member in members:
+            labelled_copy = isotope_labelled(mh, member)
+            key = min(canonical(labelled_copy), mirrored(labelled_copy))
+            groups[key] = groups.get(key, 0) + 1
+        result.append((members, sorted(groups.values())))
+    return result
+
+
+def isotope_labelled(mol, atom):
+    copy = Chem.Mol(mol)
+    copy.GetAtomWithIdx(atom).SetIsotope(13)
+    Chem.AssignStereochemistryFrom3D(copy, replaceExistingTags=True)
+    return copy
+
+
 def main(path):
     RDLogger.DisableLog("rdApp.*")
     for number, line in enumerate(open(path, encoding="utf-8"), 1):
@@ -60,10 +96,13 @@ def main(path):
         Chem.AssignStereochemistryFrom3D(mh)
         heavy = Chem.RemoveHs(mh)
         smiles = Chem.MolToSmiles(heavy, canonical=False)
-        order = list(heavy.GetPropsAsDict(True, True)["_smilesAtomOutputOrder"])
+        written = list(heavy.GetPropsAsDict(True, True)["_smilesAtomOutputOrder"])
+        order = [i for i in written if not is_plain_hydrogen(heavy.GetAtomWithIdx(i))]
         pairs = ",".join(f"{order.index(i)}:{v}" for i, v in sorted(verdicts(mh).items()))
+        carbons = ",".join(" ".join(str(order.index(m)) for m in members) + ":" + "+".join(map(str, sizes))
+                           for members, sizes in carbon_partitions(mh))
         name = parts[1] if len(parts) > 1 else str(number)
-        sys.stdout.write(f"{name}\t{smiles}\t{pairs}\n")
+        sys.stdout.write(f"{name}\t{smiles}\t{pairs}\t{carbons}\n")
 
 
 if __name__ == "__main__":
