@@ -67,6 +67,14 @@ public sealed class MolecularFormulaTests
         Assert.Equal(charge, parsed.Charge);
     }
 
+    [Fact]
+    public void Equals_ParsedAndComputedFormula_CompareByComposition()
+    {
+        var computed = MolecularFormula.Of(SmilesReader.Read("Cn1cnc2c1c(=O)n(C)c(=O)n2C").Value!);
+        Assert.Equal(MolecularFormula.Parse("C8H10N4O2").Formula, computed);
+        Assert.NotEqual(MolecularFormula.Parse("C8H11N4O2+").Formula, computed);
+    }
+
     [Theory]
     [InlineData("C10Xx2")]
     [InlineData("C10H15)")]
