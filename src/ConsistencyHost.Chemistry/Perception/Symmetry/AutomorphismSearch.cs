@@ -14,6 +14,7 @@ internal sealed class AutomorphismSearch
     private readonly ColouredGraph graph;
     private readonly PartitionRefiner refiner;
     private Func<int[], bool> accept = _ => true;
+    private Func<int[], int[], bool>? feasible;
     private readonly int[] scratch;
     private int nodes;
     private int budget = NodeBudget;
@@ -29,9 +30,17 @@ internal sealed class AutomorphismSearch
     public bool BudgetExceeded { get; private set; }
 
     /// <summary>Finds σ with σ(from[i]) = to[i] for all i that satisfies <paramref name="condition"/>, or null.</summary>
-    public int[]? Find(int[] start, IReadOnlyList<int> from, IReadOnlyList<int> to, Func<int[], bool>? condition = null)
+    /// <param name="start">Equitable partition to start from (both copies).</param>
+    /// <param name="from">Vertices whose images are prescribed.</param>
+    /// <param name="to">Their images.</param>
+    /// <param name="condition">Side condition checked on each complete automorphism.</param>
+    /// <param name="prune">Optional test on a pair of partial partitions: false when no completion can satisfy the
+    /// condition (stereo parities already decided by singleton cells), which cuts the subtree.</param>
+    public int[]? Find(int[] start, IReadOnlyList<int> from, IReadOnlyList<int> to, Func<int[], bool>? condition = null,
+        Func<int[], int[], bool>? prune = null)
     {
         accept = condition ?? (_ => true);
+        feasible = prune;
         budget = condition is null ? NodeBudget : ConditionalNodeBudget;
         nodes = 0;
         var a = start;
@@ -59,6 +68,11 @@ internal sealed class AutomorphismSearch
         if (++nodes > budget)
         {
             BudgetExceeded = true;
+            return null;
+        }
+
+        if (feasible is not null && !feasible(a, b))
+        {
             return null;
         }
 

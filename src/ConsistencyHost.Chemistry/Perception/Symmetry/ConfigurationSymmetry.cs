@@ -14,8 +14,9 @@ internal sealed record ConfigurationSymmetry(int[] Orbit, bool[] SplitHydrogens)
         var action = new StereoAction(ctx.Molecule.AtomCount, tetra, doubles);
         var cells = ctx.IsRigid ? ctx.Cells : ctx.Refiner.Initial(action.Colours());
         bool IsSymmetry(int[] s) => action.Classify(s) != SymmetryKind.None;
+        bool MayBeSymmetry(int[] a, int[] b) => action.Feasible(a, b) != SymmetryKind.None;
         var discrete = PartitionRefiner.CountCells(cells) == cells.Length;
-        var orbit = discrete ? Identity(cells.Length) : OrbitFinder.Orbits(ctx.Search, cells, IsSymmetry);
+        var orbit = discrete ? Identity(cells.Length) : OrbitFinder.Orbits(ctx.Search, cells, IsSymmetry, MayBeSymmetry);
         var split = new bool[ctx.Molecule.AtomCount];
         for (var v = 0; v < split.Length; v++)
         {
@@ -78,12 +79,14 @@ internal sealed record ConfigurationSymmetry(int[] Orbit, bool[] SplitHydrogens)
 
         var discrete = PartitionRefiner.CountCells(cells) == cells.Length;
         if (!discrete && cells[a] == cells[b]
-            && ctx.Search.Find(cells, [v, a], [v, b], s => (action.Classify(s) & SymmetryKind.Rotation) != 0) is not null)
+            && ctx.Search.Find(cells, [v, a], [v, b], s => (action.Classify(s) & SymmetryKind.Rotation) != 0,
+                (x, y) => (action.Feasible(x, y) & SymmetryKind.Rotation) != 0) is not null)
         {
             return true;
         }
 
-        return !discrete && ctx.Search.Find(cells, [v, a], [v, a], s => (action.Classify(s) & SymmetryKind.Reflection) != 0) is not null;
+        return !discrete && ctx.Search.Find(cells, [v, a], [v, a], s => (action.Classify(s) & SymmetryKind.Reflection) != 0,
+            (x, y) => (action.Feasible(x, y) & SymmetryKind.Reflection) != 0) is not null;
     }
 
     /// <summary>=CH2 on w: its H are exchanged only when a symmetry fixing the C=C swaps w's two other ligands.</summary>
@@ -108,7 +111,8 @@ internal sealed record ConfigurationSymmetry(int[] Orbit, bool[] SplitHydrogens)
         {
             0 => true,
             1 => false, // a monosubstituted alkene: one H cis, one trans to the substituent
-            _ => ctx.Search.Find(cells, [v, w, others[0]], [v, w, others[1]], s => action.Classify(s) != SymmetryKind.None) is not null,
+            _ => ctx.Search.Find(cells, [v, w, others[0]], [v, w, others[1]], s => action.Classify(s) != SymmetryKind.None,
+                (x, y) => action.Feasible(x, y) != SymmetryKind.None) is not null,
         };
     }
 }
