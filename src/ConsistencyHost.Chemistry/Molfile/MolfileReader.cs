@@ -14,7 +14,14 @@ public static class MolfileReader
     public static ReadResult<Molecule> Read(string text)
     {
         ArgumentNullException.ThrowIfNull(text);
-        return Read(text.Replace("\r\n", "\n", StringComparison.Ordinal).Split('\n'), 1);
+        var lines = text.Replace("\r\n", "\n", StringComparison.Ordinal).Split('\n');
+        var count = lines.Length;
+        while (count > 4 && lines[count - 1].Trim().Length == 0)
+        {
+            count--;
+        }
+
+        return Read(lines[..count], 1);
     }
 
     internal static ReadResult<Molecule> Read(string[] rawLines, int firstLine)

@@ -148,7 +148,7 @@ internal sealed class SmilesGraphCompleter
             if (neighbours.Count != 4 || a.BracketHydrogens > 1 || neighbours.Exists(x => x < -1))
             {
                 problems.Add(new ReadProblem(ProblemSeverity.Warning,
-                    SmilesMessages.Format(SmilesMessages.ChiralityIgnored, i, a.Order.Count + a.BracketHydrogens), a.Offset, AtomIndex: i));
+                    SmilesMessages.Format(SmilesMessages.ChiralityIgnored, i, a.Order.Count(x => x >= 0) + a.BracketHydrogens), a.Offset, AtomIndex: i));
                 continue;
             }
 

@@ -10,29 +10,26 @@ internal static class RdkitOracle
 
     private static readonly Lazy<(IReadOnlyList<OracleRow> Rows, string? Error)> Cached = new(Run);
 
+    private static readonly System.Collections.Concurrent.ConcurrentDictionary<string, Lazy<(string, string?)>> CachedSdf = new(StringComparer.Ordinal);
+
     public static (IReadOnlyList<OracleRow> Rows, string? Error) Rows => Cached.Value;
+
+    /// <summary>Output lines of rdkit_topicity.py (probe substitution) for a .smi file.</summary>
+    public static (string Text, string? Error) Topicity(string smiPath) => ExecuteScript("rdkit_topicity.py", smiPath);
+
+    /// <summary>Committed stereo cases (the NCI set carries no configurations).</summary>
+    public static string StereoCases => Path.Combine(AppContext.BaseDirectory, "Oracle", "stereo_cases.smi");
+
+    /// <summary>RDKit-written molfiles (SD text) of every molecule of a .smi file RDKit parses, with the input line.</summary>
+    public static (string Text, string? Error) Sdf(string smiPath) =>
+        CachedSdf.GetOrAdd(smiPath, p => new Lazy<(string, string?)>(() => Execute("sdf", p))).Value;
 
     private static (IReadOnlyList<OracleRow>, string?) Run()
     {
-        if (!File.Exists(Python) || !File.Exists(Nci5K))
+        var (stdout, error) = Execute(Nci5K);
+        if (error is not null)
         {
-            return ([], $"RDKit oracle needs {Python} and {Nci5K}; install python3-rdkit and rdkit-data (Debian).");
-        }
-
-        var script = Path.Combine(AppContext.BaseDirectory, "Oracle", "rdkit_oracle.py");
-        var info = new ProcessStartInfo(Python, [script, Nci5K])
-        {
-            RedirectStandardOutput = true,
-            RedirectStandardError = true,
-            UseShellExecute = false,
-        };
-        using var process = Process.Start(info)!;
-        var stderr = process.StandardError.ReadToEndAsync();
-        var stdout = process.StandardOutput.ReadToEnd();
-        process.WaitForExit();
-        if (process.ExitCode != 0)
-        {
-            return ([], $"RDKit oracle failed (exit {process.ExitCode}); is python3-rdkit installed? {stderr.Result}");
+            return ([], error);
         }
 
         var rows = new List<OracleRow>();
@@ -42,6 +39,31 @@ internal static class RdkitOracle
         }
 
         return (rows, null);
+    }
+
+    private static (string Text, string? Error) Execute(params string[] arguments) => ExecuteScript("rdkit_oracle.py", arguments);
+
+    private static (string Text, string? Error) ExecuteScript(string scriptName, params string[] arguments)
+    {
+        if (!File.Exists(Python) || !File.Exists(Nci5K))
+        {
+            return (string.Empty, $"RDKit oracle needs {Python} and {Nci5K}; install python3-rdkit and rdkit-data (Debian).");
+        }
+
+        var script = Path.Combine(AppContext.BaseDirectory, "Oracle", scriptName);
+        var info = new ProcessStartInfo(Python, [script, .. arguments])
+        {
+            RedirectStandardOutput = true,
+            RedirectStandardError = true,
+            UseShellExecute = false,
+        };
+        using var process = Process.Start(info)!;
+        var stderr = process.StandardError.ReadToEndAsync();
+        var stdout = process.StandardOutput.ReadToEnd();
+        process.WaitForExit();
+        return process.ExitCode == 0
+            ? (stdout, null)
+            : (string.Empty, $"RDKit oracle failed (exit {process.ExitCode}); is python3-rdkit installed? {stderr.Result}");
     }
 }
 

@@ -5,11 +5,15 @@ Output, one line per input line, tab-separated:
   name  FAIL
 Ranks come from Chem.CanonicalRankAtoms(mol, breakTies=False, includeChirality=False): the
 constitutional (stereo-free) refined partition that our HeavyAtomClasses are compared with.
+
+With "sdf" as first argument it writes instead, for every molecule RDKit parses, a V2000 molfile with
+2D coordinates and wedges (Chem.MolToMolBlock after rdDepictor.Compute2DCoords) and the input line number
+as data item <LINE>, for the molfile round-trip test.
 """
 import sys
 
 from rdkit import Chem, RDLogger
-from rdkit.Chem import Descriptors, rdMolDescriptors
+from rdkit.Chem import Descriptors, rdDepictor, rdMolDescriptors
 
 
 def main(path):
@@ -31,5 +35,22 @@ def main(path):
             out.write(f"{name}\tOK\t{formula}\t{mass:.8f}\t{','.join(str(r) for r in ranks)}\n")
 
 
+def sdf(path):
+    RDLogger.DisableLog("rdApp.*")
+    out = sys.stdout
+    with open(path, encoding="utf-8") as handle:
+        for number, line in enumerate(handle, 1):
+            parts = line.split()
+            mol = Chem.MolFromSmiles(parts[0]) if parts else None
+            if mol is None:
+                continue
+            rdDepictor.Compute2DCoords(mol)
+            out.write(Chem.MolToMolBlock(mol))
+            out.write(f"> <LINE>\n{number}\n\n$$$$\n")
+
+
 if __name__ == "__main__":
-    main(sys.argv[1])
+    if sys.argv[1] == "sdf":
+        sdf(sys.argv[2])
+    else:
+        main(sys.argv[1])

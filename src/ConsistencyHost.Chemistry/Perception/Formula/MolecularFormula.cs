@@ -48,6 +48,13 @@ public sealed record MolecularFormula
     /// <inheritdoc />
     public override string ToString() => Hill;
 
+    /// <summary>Same element counts and charge (masses follow; isotopic labels are not compared).</summary>
+    public bool Equals(MolecularFormula? other) =>
+        other is not null && Charge == other.Charge && Counts.SequenceEqual(other.Counts);
+
+    /// <inheritdoc />
+    public override int GetHashCode() => HashCode.Combine(Hill);
+
     /// <summary>The formula of a molecule, counting implicit and folded hydrogens.</summary>
     public static MolecularFormula Of(Molecule molecule) => FormulaCalculator.Of(molecule);
 

@@ -60,6 +60,11 @@ internal static class DoubleBondCandidates
 
         if (others.Count == 2)
         {
+            if (ctx.Cells[others[0]] != ctx.Cells[others[1]])
+            {
+                return (others[0], true);
+            }
+
             var cells = ctx.Refiner.Individualise(ctx.Cells, atom);
             return (others[0], cells[others[0]] != cells[others[1]]);
         }

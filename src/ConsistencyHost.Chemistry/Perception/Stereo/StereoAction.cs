@@ -41,6 +41,9 @@ internal sealed class StereoAction
         }
     }
 
+    /// <summary>True when at least one tetrahedral element exists (otherwise every automorphism is also reflection-like).</summary>
+    public bool HasTetrahedral => tetra.Count > 0;
+
     /// <summary>Extra vertex colours so refinement keeps stereo atoms apart from others (never splits an orbit).</summary>
     public ulong[] Colours()
     {
@@ -87,6 +90,71 @@ internal sealed class StereoAction
         }
 
         return kept == tetra.Count ? SymmetryKind.Rotation : kept == 0 ? SymmetryKind.Reflection : SymmetryKind.None;
+    }
+
+    /// <summary>Kinds still possible given the singleton cells of two partial partitions (the partial map
+    /// sends the only vertex of cell c in <paramref name="a"/> to the only vertex of cell c in <paramref name="b"/>):
+    /// elements whose atoms are all mapped already decide rotation or reflection.</summary>
+    public SymmetryKind Feasible(int[] a, int[] b)
+    {
+        var map = PartialMap(a, b);
+        var possible = SymmetryKind.Both;
+        foreach (var d in doubles)
+        {
+            if (map[d.Begin] >= 0 && map[d.End] >= 0 && map[d.BeginReference] >= 0 && map[d.EndReference] >= 0 && !DoubleKept(d, map))
+            {
+                return SymmetryKind.None;
+            }
+        }
+
+        foreach (var t in tetra)
+        {
+            if (map[t.Centre] < 0 || !Array.TrueForAll(t.Neighbours, n => n < 0 || map[n] >= 0))
+            {
+                continue;
+            }
+
+            var image = tetraAt[map[t.Centre]];
+            if (image is null)
+            {
+                return SymmetryKind.None;
+            }
+
+            possible &= MappedParity(t, image, map) == image.Parity ? SymmetryKind.Rotation : SymmetryKind.Reflection;
+            if (possible == SymmetryKind.None)
+            {
+                return possible;
+            }
+        }
+
+        return possible;
+    }
+
+    private static int[] PartialMap(int[] a, int[] b)
+    {
+        var n = a.Length;
+        var sizeA = new int[n];
+        var onlyB = new int[n];
+        Array.Fill(onlyB, -1);
+        foreach (var c in a)
+        {
+            sizeA[c]++;
+        }
+
+        var sizeB = new int[n];
+        for (var v = 0; v < n; v++)
+        {
+            sizeB[b[v]]++;
+            onlyB[b[v]] = v;
+        }
+
+        var map = new int[n];
+        for (var v = 0; v < n; v++)
+        {
+            map[v] = sizeA[a[v]] == 1 && sizeB[a[v]] == 1 ? onlyB[a[v]] : -1;
+        }
+
+        return map;
     }
 
     private static int MappedParity(TetrahedralElement t, TetrahedralElement image, int[] sigma)

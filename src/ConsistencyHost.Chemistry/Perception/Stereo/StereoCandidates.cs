@@ -48,6 +48,41 @@ internal static class StereoCandidates
         return (tetra, DoubleBondCandidates.Find(ctx));
     }
 
+    private static bool AllDistinct(int[] cells, ReadOnlySpan<int> atoms)
+    {
+        for (var i = 0; i < atoms.Length; i++)
+        {
+            for (var j = i + 1; j < atoms.Length; j++)
+            {
+                if (cells[atoms[i]] == cells[atoms[j]])
+                {
+                    return false;
+                }
+            }
+        }
+
+        return true;
+    }
+
+    /// <summary>Four-ligand centres that keep their configuration on the NMR time scale: sp3 C and Si, quaternary
+    /// N+, four-coordinate P (phosphates, phosphonates, phosphoramides, phosphonium), three-coordinate S with a lone
+    /// pair (sulfoxides, sulfinamides, sulfonium) and four-coordinate S (sulfones, sulfonamides). Neutral amines
+    /// invert quickly and are not centres.</summary>
+    private static bool IsTetrahedralKind(Molecule m, int c)
+    {
+        var a = m.Atoms[c];
+        var degree = m.Degree(c);
+        var sum = m.BondOrderSum(c);
+        return a.AtomicNumber switch
+        {
+            6 or 14 => a.Charge == 0 && degree + a.HydrogenCount == 4 && sum == degree,
+            7 => a.Charge == 1 && degree == 4 && sum == 4,
+            15 => a.Charge is 0 or 1 && degree + a.HydrogenCount == 4,
+            16 => a.HydrogenCount == 0 && ((degree == 3 && ((a.Charge == 0 && sum == 4) || (a.Charge == 1 && sum == 3))) || (degree == 4 && a.Charge == 0 && sum == 6)),
+            _ => false,
+        };
+    }
+
     private static int[] Slots(Molecule m, int c)
     {
         var n = m.Neighbours(c);
@@ -59,20 +94,14 @@ internal static class StereoCandidates
         var m = ctx.Molecule;
         var a = m.Atoms[c];
         var degree = m.Degree(c);
-        var sp3Kind = a.AtomicNumber switch
-        {
-            6 or 14 => a.Charge == 0,
-            7 => a.Charge == 1 && degree == 4,
-            15 => degree == 4 && a.Charge is 0 or 1,
-            _ => false,
-        };
-        if (!sp3Kind || degree + a.HydrogenCount != 4 || a.HydrogenCount > 1 || m.BondOrderSum(c) != degree || IsCageAtom(ctx, c))
+        if (!IsTetrahedralKind(m, c) || a.HydrogenCount > 1 || IsCageAtom(ctx, c))
         {
             return (0, (-1, -1));
         }
 
-        var cells = ctx.Refiner.Individualise(ctx.Cells, c);
         var n = m.Neighbours(c);
+        // Refinement only splits cells, so ligands already apart in the equitable partition stay apart.
+        var cells = AllDistinct(ctx.Cells, n) ? ctx.Cells : ctx.Refiner.Individualise(ctx.Cells, c);
         var equal = new List<(int, int)>();
         for (var i = 0; i < n.Length; i++)
         {

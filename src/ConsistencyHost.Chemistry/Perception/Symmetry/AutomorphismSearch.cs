@@ -10,24 +10,38 @@ namespace ConsistencyHost.Chemistry.Perception.Symmetry;
 internal sealed class AutomorphismSearch
 {
     private const int NodeBudget = 20_000;
+    private const int ConditionalNodeBudget = 4_000;
     private readonly ColouredGraph graph;
     private readonly PartitionRefiner refiner;
     private Func<int[], bool> accept = _ => true;
+    private Func<int[], int[], bool>? feasible;
+    private readonly int[] scratch;
     private int nodes;
+    private int budget = NodeBudget;
 
     public AutomorphismSearch(ColouredGraph graph, PartitionRefiner refiner)
     {
         this.graph = graph;
         this.refiner = refiner;
+        scratch = new int[graph.Count + 1];
     }
 
     /// <summary>True when some search ran out of budget (the answer "not found" is then not a proof).</summary>
     public bool BudgetExceeded { get; private set; }
 
     /// <summary>Finds σ with σ(from[i]) = to[i] for all i that satisfies <paramref name="condition"/>, or null.</summary>
-    public int[]? Find(int[] start, IReadOnlyList<int> from, IReadOnlyList<int> to, Func<int[], bool>? condition = null)
+    /// <param name="start">Equitable partition to start from (both copies).</param>
+    /// <param name="from">Vertices whose images are prescribed.</param>
+    /// <param name="to">Their images.</param>
+    /// <param name="condition">Side condition checked on each complete automorphism.</param>
+    /// <param name="prune">Optional test on a pair of partial partitions: false when no completion can satisfy the
+    /// condition (stereo parities already decided by singleton cells), which cuts the subtree.</param>
+    public int[]? Find(int[] start, IReadOnlyList<int> from, IReadOnlyList<int> to, Func<int[], bool>? condition = null,
+        Func<int[], int[], bool>? prune = null)
     {
         accept = condition ?? (_ => true);
+        feasible = prune;
+        budget = condition is null ? NodeBudget : ConditionalNodeBudget;
         nodes = 0;
         var a = start;
         var b = start;
@@ -51,9 +65,14 @@ internal sealed class AutomorphismSearch
 
     private int[]? Search(int[] a, int[] b)
     {
-        if (++nodes > NodeBudget)
+        if (++nodes > budget)
         {
             BudgetExceeded = true;
+            return null;
+        }
+
+        if (feasible is not null && !feasible(a, b))
+        {
             return null;
         }
 
@@ -88,9 +107,10 @@ internal sealed class AutomorphismSearch
     }
 
     /// <summary>First cell (lowest number) with more than one vertex, and its first vertex; -1 when discrete.</summary>
-    private static int TargetCell(int[] cells, out int first)
+    private int TargetCell(int[] cells, out int first)
     {
-        var size = new int[cells.Length];
+        var size = scratch;
+        Array.Clear(size);
         foreach (var c in cells)
         {
             size[c]++;
@@ -115,9 +135,10 @@ internal sealed class AutomorphismSearch
         return target;
     }
 
-    private static bool Compatible(int[] a, int[] b)
+    private bool Compatible(int[] a, int[] b)
     {
-        var count = new int[a.Length + 1];
+        var count = scratch;
+        Array.Clear(count);
         for (var v = 0; v < a.Length; v++)
         {
             count[a[v]]++;

@@ -8,16 +8,19 @@ namespace ConsistencyHost.Chemistry.Perception.Symmetry;
 /// <param name="SplitHydrogens">Per atom: true when its two H are diastereotopic (two classes).</param>
 internal sealed record ConfigurationSymmetry(int[] Orbit, bool[] SplitHydrogens)
 {
-    public static ConfigurationSymmetry Compute(SymmetryContext ctx, IReadOnlyList<TetrahedralElement> tetra, IReadOnlyList<DoubleBondElement> doubles)
+    public static ConfigurationSymmetry Compute(
+        SymmetryContext ctx, IReadOnlyList<TetrahedralElement> tetra, IReadOnlyList<DoubleBondElement> doubles, ISet<int>? splitNitrogens = null)
     {
         var action = new StereoAction(ctx.Molecule.AtomCount, tetra, doubles);
-        var cells = ctx.Refiner.Initial(action.Colours());
+        var cells = ctx.IsRigid ? ctx.Cells : ctx.Refiner.Initial(action.Colours());
         bool IsSymmetry(int[] s) => action.Classify(s) != SymmetryKind.None;
-        var orbit = OrbitFinder.Orbits(ctx.Search, cells, IsSymmetry);
+        bool MayBeSymmetry(int[] a, int[] b) => action.Feasible(a, b) != SymmetryKind.None;
+        var discrete = PartitionRefiner.CountCells(cells) == cells.Length;
+        var orbit = discrete ? Identity(cells.Length) : OrbitFinder.Orbits(ctx.Search, cells, IsSymmetry, MayBeSymmetry);
         var split = new bool[ctx.Molecule.AtomCount];
         for (var v = 0; v < split.Length; v++)
         {
-            split[v] = orbit[v] == v && IsSplit(ctx, action, cells, v);
+            split[v] = orbit[v] == v && (splitNitrogens?.Contains(v) == true || IsSplit(ctx, action, cells, v));
         }
 
         for (var v = 0; v < split.Length; v++)
@@ -26,6 +29,17 @@ internal sealed record ConfigurationSymmetry(int[] Orbit, bool[] SplitHydrogens)
         }
 
         return new ConfigurationSymmetry(orbit, split);
+    }
+
+    private static int[] Identity(int n)
+    {
+        var orbit = new int[n];
+        for (var i = 0; i < n; i++)
+        {
+            orbit[i] = i;
+        }
+
+        return orbit;
     }
 
     /// <summary>Are the two H of <paramref name="v"/> diastereotopic? (see nmr-methods.md §2.2 and docs/chemistry.md)</summary>
@@ -54,9 +68,26 @@ internal sealed record ConfigurationSymmetry(int[] Orbit, bool[] SplitHydrogens)
 
     /// <summary>A CH2 with ligands a, b: its H are exchanged by a rotation swapping a and b, or by a reflection
     /// fixing both (the mirror plane through a, v, b).</summary>
-    private static bool Sp3PairExchanged(SymmetryContext ctx, StereoAction action, int[] cells, int v, int a, int b) =>
-        ctx.Search.Find(cells, [v, a], [v, b], s => (action.Classify(s) & SymmetryKind.Rotation) != 0) is not null
-        || ctx.Search.Find(cells, [v, a], [v, a], s => (action.Classify(s) & SymmetryKind.Reflection) != 0) is not null;
+    /// <remarks>Shortcuts: with no tetrahedral element the identity is reflection-like; a and b in different
+    /// cells cannot be swapped; with a discrete partition the identity is the only symmetry.</remarks>
+    private static bool Sp3PairExchanged(SymmetryContext ctx, StereoAction action, int[] cells, int v, int a, int b)
+    {
+        if (!action.HasTetrahedral)
+        {
+            return true;
+        }
+
+        var discrete = PartitionRefiner.CountCells(cells) == cells.Length;
+        if (!discrete && cells[a] == cells[b]
+            && ctx.Search.Find(cells, [v, a], [v, b], s => (action.Classify(s) & SymmetryKind.Rotation) != 0,
+                (x, y) => (action.Feasible(x, y) & SymmetryKind.Rotation) != 0) is not null)
+        {
+            return true;
+        }
+
+        return !discrete && ctx.Search.Find(cells, [v, a], [v, a], s => (action.Classify(s) & SymmetryKind.Reflection) != 0,
+            (x, y) => (action.Feasible(x, y) & SymmetryKind.Reflection) != 0) is not null;
+    }
 
     /// <summary>=CH2 on w: its H are exchanged only when a symmetry fixing the C=C swaps w's two other ligands.</summary>
     private static bool TerminalAlkenePairExchanged(SymmetryContext ctx, StereoAction action, int[] cells, int v, int w)
@@ -80,7 +111,8 @@ internal sealed record ConfigurationSymmetry(int[] Orbit, bool[] SplitHydrogens)
         {
             0 => true,
             1 => false, // a monosubstituted alkene: one H cis, one trans to the substituent
-            _ => ctx.Search.Find(cells, [v, w, others[0]], [v, w, others[1]], s => action.Classify(s) != SymmetryKind.None) is not null,
+            _ => ctx.Search.Find(cells, [v, w, others[0]], [v, w, others[1]], s => action.Classify(s) != SymmetryKind.None,
+                (x, y) => action.Feasible(x, y) != SymmetryKind.None) is not null,
         };
     }
 }

@@ -47,6 +47,10 @@ public sealed class NmrEquivalence
     /// <summary>Expected number of 13C signals.</summary>
     public SignalCountRange Expected13C { get; }
 
+    /// <summary>False when an automorphism search ran out of its node budget (highly symmetric inputs such as long
+    /// perfluoroalkyl chains); classes may then be split more finely than the true symmetry allows.</summary>
+    public bool IsExact { get; private init; } = true;
+
     /// <summary>Number of relative configurations evaluated (1 when all stereo is specified or absent).</summary>
     public int ConfigurationsConsidered { get; }
 
@@ -56,20 +60,62 @@ public sealed class NmrEquivalence
         ArgumentNullException.ThrowIfNull(molecule);
         var ctx = SymmetryContext.Create(molecule);
         var constitutionalOrbit = OrbitFinder.Orbits(ctx.Search, ctx.Cells, null);
+        var constitutional = new ConstitutionalClasses(constitutionalOrbit, !ctx.Search.BudgetExceeded);
         var (tetra, doubles) = StereoCandidates.Find(ctx);
+        var independent = ctx.IsRigid || StereoElementsFixed(constitutionalOrbit, tetra, doubles);
         var stats = new List<ConfigurationStats>();
+        var elements = new List<(List<TetrahedralElement>, List<DoubleBondElement>)>();
         foreach (var (t, d) in StereoEnumeration.Configurations(tetra, doubles))
         {
             stats.Add(ConfigurationStats.Of(molecule, ConfigurationSymmetry.Compute(ctx, t, d), constitutionalOrbit));
+            elements.Add((t, d));
+            if (independent)
+            {
+                break; // no automorphism moves a stereo element: every configuration gives the same classes
+            }
         }
 
         var best = stats.MaxBy(s => s.HydrogenClassCount)!;
+        var slow = SlowRotation(ctx, elements[stats.IndexOf(best)], constitutionalOrbit);
         var hydrogens = CouplingPartners.Attach(molecule, ctx.Aromaticity, HydrogenClassBuilder.Build(molecule, best.Symmetry));
         var carbons = CarbonClasses(molecule, best.Symmetry.Orbit);
         var unspecified = StereoEnumeration.UnspecifiedCount(tetra, doubles);
-        var constitutional = new ConstitutionalClasses(constitutionalOrbit, !ctx.Search.BudgetExceeded);
+        var exact = !ctx.Search.BudgetExceeded;
         return new NmrEquivalence(hydrogens, carbons, constitutional,
-            SignalCountRanges.Hydrogen(stats, unspecified), SignalCountRanges.Carbon(stats, unspecified), stats.Count);
+            SignalCountRanges.Hydrogen(stats, unspecified, independent, exact, slow), SignalCountRanges.Carbon(stats, unspecified, independent, exact, slow), stats.Count)
+        {
+            IsExact = exact,
+        };
+    }
+
+    /// <summary>The upper-bound configuration with slow amide C–N rotation, or null when there is no such bond.</summary>
+    private static (ConfigurationStats Stats, int Bonds)? SlowRotation(
+        SymmetryContext ctx, (List<TetrahedralElement> Tetra, List<DoubleBondElement> Doubles) config, int[] constitutionalOrbit)
+    {
+        var (amides, nitrogens) = AmideRotation.Find(ctx);
+        if (amides.Count == 0 && nitrogens.Count == 0)
+        {
+            return null;
+        }
+
+        var symmetry = ConfigurationSymmetry.Compute(ctx, config.Tetra, [.. config.Doubles, .. amides], nitrogens);
+        return (ConfigurationStats.Of(ctx.Molecule, symmetry, constitutionalOrbit), amides.Count + nitrogens.Count);
+    }
+
+    /// <summary>True when every atom of every stereo element (centres, their neighbours, double-bond ends and
+    /// references) is alone in its constitutional orbit: then every automorphism fixes them all, acts on every
+    /// parity as the identity, and the configuration cannot change the classes.</summary>
+    private static bool StereoElementsFixed(int[] orbit, List<TetrahedralElement> tetra, List<DoubleBondElement> doubles)
+    {
+        var size = new int[orbit.Length];
+        foreach (var o in orbit)
+        {
+            size[o]++;
+        }
+
+        bool Alone(int atom) => atom < 0 || size[orbit[atom]] == 1;
+        return tetra.TrueForAll(t => Alone(t.Centre) && Array.TrueForAll(t.Neighbours, Alone))
+            && doubles.TrueForAll(d => Alone(d.Begin) && Alone(d.End) && Alone(d.BeginReference) && Alone(d.EndReference));
     }
 
     private static ImmutableArray<ImmutableArray<int>> CarbonClasses(Molecule m, int[] orbit)

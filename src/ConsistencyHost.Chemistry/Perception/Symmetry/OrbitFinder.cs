@@ -6,7 +6,7 @@ namespace ConsistencyHost.Chemistry.Perception.Symmetry;
 /// settles most of the cell in one step.</remarks>
 internal static class OrbitFinder
 {
-    public static int[] Orbits(AutomorphismSearch search, int[] cells, Func<int[], bool>? condition)
+    public static int[] Orbits(AutomorphismSearch search, int[] cells, Func<int[], bool>? condition, Func<int[], int[], bool>? prune = null)
     {
         var n = cells.Length;
         var parent = new int[n];
@@ -24,7 +24,7 @@ internal static class OrbitFinder
                 continue;
             }
 
-            if (!TryJoin(search, cells, condition, parent, reps, v))
+            if (!TryJoin(search, cells, condition, prune, parent, reps, v))
             {
                 reps.Add(v);
             }
@@ -39,7 +39,7 @@ internal static class OrbitFinder
         return orbit;
     }
 
-    private static bool TryJoin(AutomorphismSearch search, int[] cells, Func<int[], bool>? condition, int[] parent, List<int> reps, int v)
+    private static bool TryJoin(AutomorphismSearch search, int[] cells, Func<int[], bool>? condition, Func<int[], int[], bool>? prune, int[] parent, List<int> reps, int v)
     {
         foreach (var r in reps)
         {
@@ -51,7 +51,7 @@ internal static class OrbitFinder
 
         foreach (var r in reps)
         {
-            if (search.Find(cells, [r], [v], condition) is { } sigma)
+            if (search.Find(cells, [r], [v], condition, prune) is { } sigma)
             {
                 for (var a = 0; a < sigma.Length; a++)
                 {

@@ -11,11 +11,15 @@ internal sealed class PartitionRefiner
     private readonly ulong[] signature;
     private readonly int[] order;
 
+    private readonly Comparison<int> compare;
+    private int[] current = [];
+
     public PartitionRefiner(ColouredGraph graph)
     {
         this.graph = graph;
         signature = new ulong[graph.Adjacent.Length];
         order = new int[graph.Count];
+        compare = (a, b) => Compare(current, a, b);
     }
 
     /// <summary>Initial cells from vertex invariants plus an optional extra colour per vertex.</summary>
@@ -45,13 +49,41 @@ internal sealed class PartitionRefiner
     /// <summary>Gives <paramref name="vertex"/> a cell of its own (placed before the rest of its cell) and refines.</summary>
     public int[] Individualise(int[] cells, int vertex)
     {
-        var keys = new ulong[cells.Length];
+        // Cells are dense ranks: the vertex keeps its cell number, the rest of its cell and every later cell
+        // move up by one. Same result as re-ranking (2·cell + [v ≠ vertex]) without a sort.
+        var c = cells[vertex];
+        var next = new int[cells.Length];
         for (var v = 0; v < cells.Length; v++)
         {
-            keys[v] = (2UL * (ulong)(uint)cells[v]) + (v == vertex ? 0UL : 1UL);
+            next[v] = cells[v] > c || (cells[v] == c && v != vertex) ? cells[v] + 1 : cells[v];
         }
 
-        return Refine(DenseRank(keys, out _));
+        return Refine(Densify(next));
+    }
+
+    /// <summary>Closes the gap left when the individualised vertex was alone in its cell.</summary>
+    private static int[] Densify(int[] cells)
+    {
+        var used = new bool[cells.Length + 1];
+        foreach (var c in cells)
+        {
+            used[c] = true;
+        }
+
+        var map = new int[used.Length];
+        var rank = 0;
+        for (var c = 0; c < used.Length; c++)
+        {
+            map[c] = rank;
+            rank += used[c] ? 1 : 0;
+        }
+
+        for (var v = 0; v < cells.Length; v++)
+        {
+            cells[v] = map[cells[v]];
+        }
+
+        return cells;
     }
 
     public int[] Refine(int[] cells)
@@ -94,7 +126,8 @@ internal sealed class PartitionRefiner
             order[v] = v;
         }
 
-        Array.Sort(order, (a, b) => Compare(cells, a, b));
+        current = cells;
+        Array.Sort(order, compare);
         var result = new int[graph.Count];
         var rank = 0;
         for (var i = 0; i < order.Length; i++)

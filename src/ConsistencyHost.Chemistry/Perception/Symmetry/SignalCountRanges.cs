@@ -5,7 +5,7 @@ namespace ConsistencyHost.Chemistry.Perception.Symmetry;
 /// <summary>Turns per-configuration counts into expected signal-count ranges with reasons (nmr-methods.md §2.7).</summary>
 internal static class SignalCountRanges
 {
-    public static SignalCountRange Hydrogen(List<ConfigurationStats> stats, int unspecified)
+    public static SignalCountRange Hydrogen(List<ConfigurationStats> stats, int unspecified, bool rigid, bool exact, (ConfigurationStats Stats, int Bonds)? slow)
     {
         var reasons = new List<string>();
         var max = stats.Max(s => s.HydrogenClassCount);
@@ -26,11 +26,13 @@ internal static class SignalCountRanges
             reasons.Add(F($"{worst.DiastereotopicHydrogenGroups} diastereotopic group(s) (e.g. isopropyl methyls) may coincide"));
         }
 
-        AddConfigurationReason(reasons, stats, unspecified, s => s.HydrogenClassCount);
-        return new SignalCountRange(Math.Max(min, stats.Count == 0 ? 0 : 1), max, reasons);
+        AddConfigurationReason(reasons, stats, rigid ? 0 : unspecified, s => s.HydrogenClassCount);
+        AddExactnessReason(reasons, exact);
+        max = AddSlowRotation(reasons, slow, max, s => s.HydrogenClassCount);
+        return new SignalCountRange(Math.Clamp(min, 0, max), max, reasons);
     }
 
-    public static SignalCountRange Carbon(List<ConfigurationStats> stats, int unspecified)
+    public static SignalCountRange Carbon(List<ConfigurationStats> stats, int unspecified, bool rigid, bool exact, (ConfigurationStats Stats, int Bonds)? slow)
     {
         var reasons = new List<string>();
         var max = stats.Max(s => s.CarbonClassCount);
@@ -41,7 +43,9 @@ internal static class SignalCountRanges
             reasons.Add(F($"{worst.DiastereotopicCarbons} diastereotopic carbon(s) may coincide with their constitutional partner"));
         }
 
-        AddConfigurationReason(reasons, stats, unspecified, s => s.CarbonClassCount);
+        AddConfigurationReason(reasons, stats, rigid ? 0 : unspecified, s => s.CarbonClassCount);
+        AddExactnessReason(reasons, exact);
+        max = AddSlowRotation(reasons, slow, max, s => s.CarbonClassCount);
         return new SignalCountRange(Math.Min(min, max), max, reasons);
     }
 
@@ -56,6 +60,26 @@ internal static class SignalCountRanges
         else if (lo != hi)
         {
             reasons.Add(F($"relative configuration of {unspecified} stereo element(s) unspecified: {lo} to {hi} classes over {stats.Count} configurations"));
+        }
+    }
+
+    /// <summary>Slow amide rotation can only add signals (rotamers): it raises Max, never Min (§2.6, §2.7).</summary>
+    private static int AddSlowRotation(List<string> reasons, (ConfigurationStats Stats, int Bonds)? slow, int max, Func<ConfigurationStats, int> count)
+    {
+        if (slow is not { } s || count(s.Stats) <= max)
+        {
+            return max;
+        }
+
+        reasons.Add(F($"{s.Bonds} amide/carbamate C–N bond(s) rotate slowly at room temperature: rotamer or cis/trans N-substituent signals may add up to {count(s.Stats) - max}"));
+        return count(s.Stats);
+    }
+
+    private static void AddExactnessReason(List<string> reasons, bool exact)
+    {
+        if (!exact)
+        {
+            reasons.Add("symmetry search budget exceeded: some equivalent atoms may be listed as separate classes");
         }
     }
 

@@ -8,6 +8,10 @@ internal sealed record SymmetryContext(
     Molecule Molecule, RingSet Rings, Aromaticity Aromaticity, ColouredGraph Graph, PartitionRefiner Refiner,
     AutomorphismSearch Search, int[] Cells)
 {
+    /// <summary>True when the equitable partition is discrete: the automorphism group is trivial, so every
+    /// configuration has the same (trivial) symmetry and the searches reduce to the identity.</summary>
+    public bool IsRigid { get; } = PartitionRefiner.CountCells(Cells) == Cells.Length;
+
     public static SymmetryContext Create(Molecule molecule)
     {
         var rings = RingSet.Of(molecule);
