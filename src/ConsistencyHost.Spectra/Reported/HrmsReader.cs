@@ -76,37 +76,73 @@ internal static class HrmsReader
         var close = c.MatchingParen(c.Pos);
         if (close < 0) return null;
         var text = c.Text[(c.Pos + 1)..close].Trim();
+        if (LooksLikeIon(text)) return null; // "HRMS (M+H)+ calcd …": the parentheses hold the ion, read next
         c.Pos = close + 1;
         return text;
     }
 
+    /// <summary>"M+H", "M + Na", "M–H": an ion written in parentheses, not an ionisation method.</summary>
+    private static bool LooksLikeIon(string text) =>
+        text.StartsWith('M') && text.Length > 1 && text.Skip(1).SkipWhile(TextCursor.IsSpace).FirstOrDefault() is '+' or '-' or '−' or '–';
+
     private static void SkipPunctuation(TextCursor c)
     {
         c.SkipSpaces();
-        while (c.Current is ':' or '=')
+        while (c.Current is ':' or '=' or ',')
         {
             c.Pos++;
             c.SkipSpaces();
         }
     }
 
-    /// <summary>"[M + H]+", "(M+H)+", "[M+Na]⁺", "[M−H]−", "M+•" with blanks removed and superscript charges made plain.</summary>
+    /// <summary>Longest bracketed ion label looked at ("[M + H + CH3CN]+" is 16), so an unclosed bracket never
+    /// swallows the rest of the text.</summary>
+    private const int MaxBracketedLabel = 40;
+
+    /// <summary>
+    /// "[M + H]+", "(M+H)+", "[M+Na]⁺", "[M−H]−", "[M–H]–", "[M+2H]²⁺", "M+•", "MH+", "MNa+" with blanks removed,
+    /// dashes and superscripts made plain.
+    /// </summary>
     private static string? ReadIonLabel(TextCursor c)
     {
         var start = c.Pos;
         if (c.Current is '[' or '(')
         {
-            var close = c.Text.IndexOf(c.Current == '[' ? ']' : ')', c.Pos);
+            var close = CloseOnSameLine(c.Text, c.Pos, c.Current == '[' ? ']' : ')');
             if (close < 0) return null;
             c.Pos = close + 1;
         }
-        else if (c.Current == 'M' && c.PeekAt(1) is '+' or '⁺' or '-' or '−' or '•' or '·') c.Pos++;
+        else if (c.Current == 'M' && (IsCharge(c.PeekAt(1)) || c.PeekAt(1) is '•' or '·')) c.Pos++;
+        else if (c.Current == 'M' && AdductThenCharge(c.Text, c.Pos + 1) is { } end) c.Pos = end;
         else return null;
-        while (c.Current is '+' or '-' or '⁺' or '⁻' or '−' or '•' or '·' || (TextCursor.IsDigit(c.Current) && c.PeekAt(1) is '+' or '-')) c.Pos++;
+        while (IsCharge(c.Current) || c.Current is '•' or '·' || (IsChargeDigit(c.Current) && IsCharge(c.PeekAt(1)))) c.Pos++;
         return string.Concat(c.Text[start..c.Pos].Where(ch => !TextCursor.IsSpace(ch)).Select(Plain));
     }
 
-    private static char Plain(char ch) => ch switch { '⁺' => '+', '⁻' or '−' => '-', '·' => '•', _ => ch };
+    private static int CloseOnSameLine(string text, int open, char closing)
+    {
+        for (var i = open + 1; i < text.Length && i - open <= MaxBracketedLabel; i++)
+        {
+            if (text[i] == closing) return i;
+            if (text[i] is '\n' or '\r') return -1;
+        }
+
+        return -1;
+    }
+
+    /// <summary>"MH+", "MNa+", "MNH4+": adduct symbols right after M, then a charge; returns where the charge starts.</summary>
+    private static int? AdductThenCharge(string text, int from)
+    {
+        var i = from;
+        while (i < text.Length && (char.IsAsciiLetter(text[i]) || char.IsAsciiDigit(text[i]))) i++;
+        return i > from && char.IsAsciiLetterUpper(text[from]) && i < text.Length && IsCharge(text[i]) ? i : null;
+    }
+
+    private static bool IsCharge(char ch) => ch is '+' or '-' or '⁺' or '⁻' or '−' or '–';
+
+    private static bool IsChargeDigit(char ch) => TextCursor.IsDigit(ch) || ch is '²' or '³';
+
+    private static char Plain(char ch) => ch switch { '⁺' => '+', '⁻' or '−' or '–' => '-', '·' => '•', '²' => '2', '³' => '3', _ => ch };
 
     private static string ReadFormula(TextCursor c)
     {

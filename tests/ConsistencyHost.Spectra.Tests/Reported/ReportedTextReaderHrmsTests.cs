@@ -23,7 +23,18 @@ public sealed class ReportedTextReaderHrmsTests
     [InlineData("HRMS (ESI) calculated for C8H11N4O2 [M+H]⁺ 195.0877, found 195.0875.", "ESI", "[M+H]+", "C8H11N4O2", 195.0877, 195.0875)]
     // Common practice: parentheses instead of brackets around the ion.
     [InlineData("HRMS (ESI) m/z: (M+H)+ calcd for C8H11N4O2 195.0877; found 195.0875.", "ESI", "(M+H)+", "C8H11N4O2", 195.0877, 195.0875)]
-    public void Read_HrmsVariant_GivesClaim(string text, string ionisation, string ion, string formula, double calcd, double found)
+    // Common practice: en dash for minus in negative-mode ions, as typeset by word processors.
+    [InlineData("HRMS (ESI) m/z: [M–H]– calcd for C9H7O4 179.0350; found 179.0347.", "ESI", "[M-H]-", "C9H7O4", 179.0350, 179.0347)]
+    // Common practice: superscript charge on a doubly charged ion.
+    [InlineData("HRMS (ESI) m/z: [M+2H]²⁺ calcd for C16H20N2O2 136.0757; found 136.0755.", "ESI", "[M+2H]2+", "C16H20N2O2", 136.0757, 136.0755)]
+    // Common practice: the older "MH+" and "MNa+" shorthand.
+    [InlineData("HRMS (FAB) m/z MH+ calcd for C8H11N4O2 195.0877, found 195.0880.", "FAB", "MH+", "C8H11N4O2", 195.0877, 195.0880)]
+    [InlineData("HRMS (ESI) m/z MNa+ calcd for C12H15NO3Na 244.0944, found 244.0941.", "ESI", "MNa+", "C12H15NO3Na", 244.0944, 244.0941)]
+    // Common practice: a comma between the formula and the calculated value.
+    [InlineData("HRMS (ESI) m/z: [M + H]+ calcd for C8H11N4O2, 195.0877; found 195.0875.", "ESI", "[M+H]+", "C8H11N4O2", 195.0877, 195.0875)]
+    // Common practice: the ion in parentheses right after HRMS, no ionisation named.
+    [InlineData("HRMS (M+H)+ calcd for C8H11N4O2 195.0877, found 195.0875.", null, "(M+H)+", "C8H11N4O2", 195.0877, 195.0875)]
+    public void Read_HrmsVariant_GivesClaim(string text, string? ionisation, string ion, string formula, double calcd, double found)
     {
         var result = ReportedTextReader.Read(text);
         Assert.True(result.Succeeded, string.Join("; ", result.Problems.Select(p => p.Message)));
