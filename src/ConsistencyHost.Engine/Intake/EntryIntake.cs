@@ -40,7 +40,7 @@ public sealed class EntryIntake(IntakeLimits limits)
         {
             EntryId = submission.EntryId,
             Structure = structure,
-            Molecule = structure is not null ? StructureIntake.Read(structure) : null,
+            Molecule = structure is not null ? StructureIntake.Read(structure, limits.MaxAtoms) : null,
             Spectra = spectra,
             Claims = new EntryClaims
             {

@@ -15,6 +15,12 @@ public sealed record IntakeLimits
     /// <summary>Longest structure text, characters (a molfile of ~2,000 atoms).</summary>
     public int MaxStructureLength { get; init; } = 200_000;
 
+    /// <summary>
+    /// Most atoms in the structure (heavy atoms plus any hydrogens kept as atoms). Small-molecule entries
+    /// rarely pass 150; 500 leaves room for large natural products while bounding the symmetry search.
+    /// </summary>
+    public int MaxAtoms { get; init; } = 500;
+
     /// <summary>Most spectra per entry.</summary>
     public int MaxSpectra { get; init; } = 32;
 

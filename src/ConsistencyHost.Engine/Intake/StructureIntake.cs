@@ -10,7 +10,7 @@ namespace ConsistencyHost.Engine.Intake;
 /// <summary>Reads the submitted structure; any error makes the entry unusable, with the reader's position.</summary>
 internal static class StructureIntake
 {
-    public static Molecule Read(StructureSource source)
+    public static Molecule Read(StructureSource source, int maxAtoms)
     {
         var field = EntryIntake.StructureField(source);
         var result = source.Format == StructureFormat.Smiles
@@ -18,7 +18,9 @@ internal static class StructureIntake
             : MolfileReader.Read(source.Text);
         if (result.Succeeded)
         {
-            return result.Value!;
+            return result.Value!.AtomCount <= maxAtoms
+                ? result.Value
+                : throw new EntryInputException(field, $"has {result.Value.AtomCount} atoms; the limit is {maxAtoms}");
         }
 
         var errors = result.Problems.Where(p => p.Severity == ProblemSeverity.Error).Select(Describe).ToList();

@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Net;
+using System.Threading.RateLimiting;
 using ConsistencyHost.Engine;
 using ConsistencyHost.Engine.Profiles;
 using ConsistencyHost.Server.Services;
@@ -38,11 +39,19 @@ public static class ServerApp
         ConfigureKestrel(builder.WebHost, server);
 
         builder.Services.AddSingleton(engine);
+        builder.Services.AddSingleton(new ConcurrencyGateOptions(server.MaxConcurrentCalls, server.QueueLimit));
+        builder.Services.AddSingleton(new ConcurrencyLimiter(new ConcurrencyLimiterOptions
+        {
+            PermitLimit = server.MaxConcurrentCalls,
+            QueueLimit = server.QueueLimit,
+            QueueProcessingOrder = QueueProcessingOrder.OldestFirst,
+        }));
         builder.Services.AddGrpc(options =>
         {
             options.MaxReceiveMessageSize = server.MaxReceiveMessageBytes;
             options.MaxSendMessageSize = server.MaxSendMessageBytes;
             options.EnableDetailedErrors = false;
+            options.Interceptors.Add<ConcurrencyGate>();
             options.Interceptors.Add<InputErrorInterceptor>();
         });
         builder.Services.AddGrpcReflection();
@@ -81,6 +90,8 @@ public static class ServerApp
             BindAddress = section.GetValue("BindAddress", defaults.BindAddress) ?? defaults.BindAddress,
             MaxReceiveMessageBytes = section.GetValue("MaxReceiveMessageBytes", defaults.MaxReceiveMessageBytes),
             MaxSendMessageBytes = section.GetValue("MaxSendMessageBytes", defaults.MaxSendMessageBytes),
+            MaxConcurrentCalls = section.GetValue("MaxConcurrentCalls", defaults.MaxConcurrentCalls),
+            QueueLimit = section.GetValue("QueueLimit", defaults.QueueLimit),
         };
     }
 

@@ -17,6 +17,12 @@ public sealed record ServerOptions
     /// </summary>
     public int MaxReceiveMessageBytes { get; init; } = 4 * 1024 * 1024;
 
+    /// <summary>Calls checked at once (CPU-bound work: more than a few per core only adds latency).</summary>
+    public int MaxConcurrentCalls { get; init; } = Math.Max(4, Environment.ProcessorCount * 4);
+
+    /// <summary>Calls allowed to wait for a slot before new ones are refused with RESOURCE_EXHAUSTED.</summary>
+    public int QueueLimit { get; init; } = 256;
+
     /// <summary>Largest reply sent, bytes.</summary>
     public int MaxSendMessageBytes { get; init; } = 16 * 1024 * 1024;
 }
