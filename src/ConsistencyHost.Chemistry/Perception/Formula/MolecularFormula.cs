@@ -48,6 +48,22 @@ public sealed record MolecularFormula
     /// <inheritdoc />
     public override string ToString() => Hill;
 
+    /// <summary>This formula plus <paramref name="other"/> (counts and charges add), e.g. M + H+ for [M+H]+.</summary>
+    public MolecularFormula Plus(MolecularFormula other)
+    {
+        ArgumentNullException.ThrowIfNull(other);
+        var counts = new Dictionary<string, int>(Counts, StringComparer.Ordinal);
+        foreach (var (symbol, n) in other.Counts)
+        {
+            counts[symbol] = counts.GetValueOrDefault(symbol) + n;
+        }
+
+        return FormulaCalculator.FromCounts(counts, Charge + other.Charge);
+    }
+
+    /// <summary>The same atoms with another net charge (the mass follows the electron count).</summary>
+    public MolecularFormula WithCharge(int charge) => FormulaCalculator.FromCounts(Counts, charge);
+
     /// <summary>Same element counts and charge (masses follow; isotopic labels are not compared).</summary>
     public bool Equals(MolecularFormula? other) =>
         other is not null && Charge == other.Charge && Counts.SequenceEqual(other.Counts);

@@ -38,9 +38,11 @@ internal sealed record ConfigurationStats(
             h += hClasses;
             pairs += s.SplitHydrogens[v] ? 1 : 0;
             exchangeable += IsExchangeableParent(atom) ? hClasses : 0;
+            // Exchangeable classes are already allowed to vanish; count coinciding diastereotopic groups once.
             var key = constitutional[v];
             var (kh, kc) = stereoOrbitsPerConstitutional.GetValueOrDefault(key);
-            stereoOrbitsPerConstitutional[key] = (kh + (hClasses > 0 ? 1 : 0), kc + (isCarbon ? 1 : 0));
+            var countsForH = hClasses > 0 && !IsExchangeableParent(atom);
+            stereoOrbitsPerConstitutional[key] = (kh + (countsForH ? 1 : 0), kc + (isCarbon ? 1 : 0));
         }
 
         var extraH = stereoOrbitsPerConstitutional.Values.Sum(x => Math.Max(0, x.H - 1));

@@ -9,10 +9,11 @@ namespace ConsistencyHost.Chemistry.Perception.Symmetry;
 internal sealed record ConfigurationSymmetry(int[] Orbit, bool[] SplitHydrogens)
 {
     public static ConfigurationSymmetry Compute(
-        SymmetryContext ctx, IReadOnlyList<TetrahedralElement> tetra, IReadOnlyList<DoubleBondElement> doubles, ISet<int>? splitNitrogens = null)
+        SymmetryContext ctx, IReadOnlyList<TetrahedralElement> tetra, IReadOnlyList<DoubleBondElement> doubles, ISet<int>? splitNitrogens = null,
+        int[]? startCells = null)
     {
         var action = new StereoAction(ctx.Molecule.AtomCount, tetra, doubles);
-        var cells = ctx.IsRigid ? ctx.Cells : ctx.Refiner.Initial(action.Colours());
+        var cells = ctx.IsRigid ? ctx.Cells : startCells ?? StartCells(ctx, action);
         bool IsSymmetry(int[] s) => action.Classify(s) != SymmetryKind.None;
         bool MayBeSymmetry(int[] a, int[] b) => action.Feasible(a, b) != SymmetryKind.None;
         var discrete = PartitionRefiner.CountCells(cells) == cells.Length;
@@ -30,6 +31,13 @@ internal sealed record ConfigurationSymmetry(int[] Orbit, bool[] SplitHydrogens)
 
         return new ConfigurationSymmetry(orbit, split);
     }
+
+    /// <summary>The equitable partition with stereo atoms coloured; it depends on which atoms carry elements,
+    /// not on their parities, so one partition serves every configuration of a molecule.</summary>
+    public static int[] StartCells(SymmetryContext ctx, IReadOnlyList<TetrahedralElement> tetra, IReadOnlyList<DoubleBondElement> doubles) =>
+        StartCells(ctx, new StereoAction(ctx.Molecule.AtomCount, tetra, doubles));
+
+    private static int[] StartCells(SymmetryContext ctx, StereoAction action) => ctx.Refiner.Initial(action.Colours());
 
     private static int[] Identity(int n)
     {

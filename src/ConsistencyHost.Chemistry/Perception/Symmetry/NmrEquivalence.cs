@@ -65,9 +65,10 @@ public sealed class NmrEquivalence
         var independent = ctx.IsRigid || StereoElementsFixed(constitutionalOrbit, tetra, doubles);
         var stats = new List<ConfigurationStats>();
         var elements = new List<(List<TetrahedralElement>, List<DoubleBondElement>)>();
+        var startCells = ctx.IsRigid ? ctx.Cells : ConfigurationSymmetry.StartCells(ctx, tetra, doubles);
         foreach (var (t, d) in StereoEnumeration.Configurations(tetra, doubles))
         {
-            stats.Add(ConfigurationStats.Of(molecule, ConfigurationSymmetry.Compute(ctx, t, d), constitutionalOrbit));
+            stats.Add(ConfigurationStats.Of(molecule, ConfigurationSymmetry.Compute(ctx, t, d, null, startCells), constitutionalOrbit));
             elements.Add((t, d));
             if (independent)
             {

@@ -33,6 +33,16 @@ public sealed class EnvironmentReportTests
     }
 
     [Fact]
+    public void Describe_InositolWithoutConfiguration_SpansScylloToMyo()
+    {
+        // Common practice (from memory of the 13C spectra): scyllo-inositol shows one 13C line, myo-inositol four
+        // (C2, C5, C1/C3, C4/C6); as 1H classes myo has 4 CH + 4 OH, scyllo 1 CH + 1 OH.
+        var r = EnvironmentReport.Describe(SmilesReader.Read("OC1C(O)C(O)C(O)C(O)C1O").Value!);
+        Assert.Equal((1, 4), (r.Expected13C.Min, r.Expected13C.Max));
+        Assert.Equal((1, 8), (r.Expected1H.Min, r.Expected1H.Max));
+    }
+
+    [Fact]
     public void Describe_MolfileAndSmiles_GiveTheSameReport()
     {
         // Same compound (L-alanine) from two readers; the molfile is RDKit's MolToMolBlock of N[C@@H](C)C(=O)O.

@@ -67,6 +67,23 @@ public sealed class MolecularFormulaTests
         Assert.Equal(charge, parsed.Charge);
     }
 
+    [Theory]
+    [InlineData("H+", 195.087652)] // caffeine [M+H]+, nmr-data-standards.md §7.3
+    [InlineData("Na+", 217.069596)] // caffeine [M+Na]+, same
+    public void Plus_Adduct_GivesPublishedIonMass(string adduct, double mass)
+    {
+        var m = MolecularFormula.Of(SmilesReader.Read("Cn1cnc2c1c(=O)n(C)c(=O)n2C").Value!);
+        Assert.Equal(mass, m.Plus(MolecularFormula.Parse(adduct).Formula!).MonoisotopicMass, 6);
+    }
+
+    [Fact]
+    public void WithCharge_RadicalCation_SubtractsOneElectron()
+    {
+        // M+• = M − me (nmr-data-standards.md §7.3).
+        var m = MolecularFormula.Parse("C8H10N4O2").Formula!;
+        Assert.Equal(m.MonoisotopicMass - MolecularFormula.ElectronMass, m.WithCharge(1).MonoisotopicMass, 9);
+    }
+
     [Fact]
     public void Equals_ParsedAndComputedFormula_CompareByComposition()
     {
