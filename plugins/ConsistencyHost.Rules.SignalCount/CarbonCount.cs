@@ -12,7 +12,7 @@ internal static class CarbonCount
 {
     public static IEnumerable<Finding> Check(Spectrum spectrum, int spectrumIndex, StructurePerception perception, SignalCountOptions options)
     {
-        var expected = ExpectedSignals.Carbon(perception.Molecule, perception.Equivalence);
+        var expected = ExpectedSignals.Carbon(perception.Equivalence);
         var (min, max) = (expected.Min, expected.Max);
         var lines = CountedLines(spectrum, max);
         if (lines.Count > max)

@@ -14,7 +14,7 @@ internal static class ProtonCount
     {
         var interpretation = entry.Analysis.Protons(spectrumIndex)!;
         var spectrum = entry.Spectra[spectrumIndex];
-        var expected = ExpectedSignals.Proton(perception.Molecule, perception.Equivalence, spectrum.Solvent);
+        var expected = ExpectedSignals.Proton(perception.Equivalence, spectrum.Solvent);
         var (min, max) = (expected.Min, expected.Max);
         var observed = interpretation.CompoundSignals.Count;
         if (observed > max)

@@ -99,7 +99,7 @@ public sealed class SolventResidualRule : Rule<SolventResidualOptions>
     {
         if (entry.Perception is not { } perception) yield break;
         var counted = spectrum.Signals.Count(s => !s.Notes.Any(n => n.Contains("minor", StringComparison.OrdinalIgnoreCase)));
-        if (counted <= ExpectedSignals.Carbon(perception.Molecule, perception.Equivalence).Max) yield break;
+        if (counted <= ExpectedSignals.Carbon(perception.Equivalence).Max) yield break;
         foreach (var match in new ResidualMatcher().Match(spectrum).Matches.Where(m => m.Kind == ResidualMatchKind.ResidualSolvent))
         {
             yield return Residual(spectrum, index, match.SignalIndex, match, "the list has more lines than the structure has carbon environments");

@@ -12,8 +12,9 @@ public sealed record SplittableClass(int ClassIndex, IReadOnlyList<int> FirstHal
 /// <summary>
 /// Slow rotation about the C–N bond of amides, thioamides and carbamates (barriers of roughly 15–21 kcal/mol,
 /// so two N-substituents are distinct on the NMR time scale at room temperature: N,N-dimethylformamide shows
-/// two N-methyl singlets, 2.96 and 2.88 ppm in CDCl3, Gottlieb et al. 1997). A 2D structure gives the
-/// fast-exchange classes; this finds the classes that the slow limit splits, so expected counts become ranges.
+/// two N-methyl singlets, 2.96 and 2.88 ppm in CDCl3, Gottlieb et al. 1997). The chemistry core already widens
+/// the expected counts for it; the interpreter also needs the split classes themselves (which protons go
+/// together) to assign integrals, which this finds.
 /// </summary>
 /// <remarks>
 /// Handled: a carbonyl or thiocarbonyl carbon bonded to exactly one nitrogen that carries two substituents
