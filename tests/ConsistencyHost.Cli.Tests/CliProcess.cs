@@ -1,4 +1,3 @@
-using System.Diagnostics;
 using ConsistencyHost.Tests.Shared;
 
 namespace ConsistencyHost.Cli.Tests;
@@ -16,30 +15,6 @@ internal static class CliProcess
         }
     }
 
-    public static async Task<(int ExitCode, string Stdout, string Stderr)> RunAsync(params string[] args)
-    {
-        var start = new ProcessStartInfo("dotnet")
-        {
-            RedirectStandardOutput = true,
-            RedirectStandardError = true,
-            WorkingDirectory = RepoPaths.Root,
-        };
-        start.ArgumentList.Add(Path.Combine(Directory, "consistencyhost.dll"));
-        foreach (var arg in args) start.ArgumentList.Add(arg);
-        using var process = Process.Start(start)!;
-        var stdout = process.StandardOutput.ReadToEndAsync();
-        var stderr = process.StandardError.ReadToEndAsync();
-        using var timeout = new CancellationTokenSource(TimeSpan.FromMinutes(2));
-        try
-        {
-            await process.WaitForExitAsync(timeout.Token);
-        }
-        catch (OperationCanceledException)
-        {
-            process.Kill(entireProcessTree: true);
-            throw;
-        }
-
-        return (process.ExitCode, await stdout, await stderr);
-    }
+    public static Task<(int ExitCode, string Stdout, string Stderr)> RunAsync(params string[] args) =>
+        ChildProcess.RunAsync("dotnet", [Path.Combine(Directory, "consistencyhost.dll"), .. args], RepoPaths.Root);
 }

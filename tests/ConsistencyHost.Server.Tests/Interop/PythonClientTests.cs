@@ -1,4 +1,3 @@
-using System.Diagnostics;
 using System.Globalization;
 using System.Text.Json;
 using ConsistencyHost.Server.Tests.EndToEnd;
@@ -32,25 +31,9 @@ public sealed class PythonClientTests
         Assert.Equal("INVALID_ARGUMENT", root.GetProperty("badRequestStatus").GetString());
     }
 
-    private static async Task<(int ExitCode, string Stdout, string Stderr)> RunAsync(string file, params string[] args)
+    private static Task<(int ExitCode, string Stdout, string Stderr)> RunAsync(string file, params string[] args)
     {
         Assert.True(File.Exists(file), $"{file} is missing: install Debian's python3-grpcio and python3-grpc-tools (see .ci/run)");
-        var start = new ProcessStartInfo(file) { RedirectStandardOutput = true, RedirectStandardError = true };
-        foreach (var arg in args) start.ArgumentList.Add(arg);
-        using var process = Process.Start(start)!;
-        var stdout = process.StandardOutput.ReadToEndAsync();
-        var stderr = process.StandardError.ReadToEndAsync();
-        using var timeout = new CancellationTokenSource(TimeSpan.FromMinutes(2));
-        try
-        {
-            await process.WaitForExitAsync(timeout.Token);
-        }
-        catch (OperationCanceledException)
-        {
-            process.Kill(entireProcessTree: true);
-            throw;
-        }
-
-        return (process.ExitCode, await stdout, await stderr);
+        return ChildProcess.RunAsync(file, args);
     }
 }
