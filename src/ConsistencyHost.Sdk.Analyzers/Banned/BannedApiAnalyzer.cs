@@ -1,6 +1,7 @@
 using System.Collections.Immutable;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.CSharp;
+using Microsoft.CodeAnalysis.CSharp.Syntax;
 using Microsoft.CodeAnalysis.Diagnostics;
 using Microsoft.CodeAnalysis.Operations;
 
@@ -8,13 +9,12 @@ namespace ConsistencyHost.Sdk.Analyzers.Banned;
 
 /// <summary>
 /// Reports every use of an API on the banned list (CHSDK1001) or of a nondeterministic one (CHSDK2001):
-/// calls, object creation, property, field, event and method-group references, typeof, attributes,
-/// P/Invoke declarations, base types, and unsafe code enabled for the compilation.
+/// calls, object creation, property, field, event and method-group references, typeof, attributes
+/// (so P/Invoke declarations), base types, and unsafe code enabled for the compilation.
 /// </summary>
 [DiagnosticAnalyzer(LanguageNames.CSharp)]
 public sealed class BannedApiAnalyzer : DiagnosticAnalyzer
 {
-    private const string DllImportId = "T:System.Runtime.InteropServices.DllImportAttribute";
     private const string UnverifiableCodeId = "T:System.Security.UnverifiableCodeAttribute";
 
     /// <inheritdoc />
@@ -57,6 +57,12 @@ public sealed class BannedApiAnalyzer : DiagnosticAnalyzer
 
     private static void Check(OperationAnalysisContext context, BannedSymbolIndex index, ISymbol? symbol)
     {
+        // Attributes (DllImport, LibraryImport, UnsafeAccessor, SkipLocalsInit) are reported once, by the declaration check.
+        if (context.Operation.Syntax is AttributeSyntax)
+        {
+            return;
+        }
+
         if (index.Find(symbol) is { } entry)
         {
             context.ReportDiagnostic(Create(entry, symbol!.ToDisplayString(), context.Operation.Syntax.GetLocation()));
@@ -73,11 +79,6 @@ public sealed class BannedApiAnalyzer : DiagnosticAnalyzer
                 var location = attribute.ApplicationSyntaxReference?.GetSyntax(context.CancellationToken).GetLocation() ?? symbol.Locations[0];
                 context.ReportDiagnostic(Create(entry, attribute.AttributeClass!.ToDisplayString(), location));
             }
-        }
-
-        if (symbol is IMethodSymbol method && method.GetDllImportData() is not null && Entry(index, DllImportId) is { } pinvoke)
-        {
-            context.ReportDiagnostic(Create(pinvoke, "[DllImport] " + method.ToDisplayString(), symbol.Locations[0]));
         }
 
         if (symbol is INamedTypeSymbol type && index.FindType(type.BaseType) is { } baseEntry)
