@@ -23,6 +23,12 @@ internal static class VettingCorpus
             ],
             SourcePluginReferences.All, SourcePluginReferences.Options);
 
+    /// <summary>Compiles one source text as an assembly, as a plugin project would (optionally with unsafe code on).</summary>
+    public static byte[] EmitSource(string assemblyName, string source, bool allowUnsafe = false) =>
+        Emit(CSharpCompilation.Create(assemblyName,
+            [SourcePluginReferences.GlobalUsings(SourcePluginReferences.ParseOptions), CSharpSyntaxTree.ParseText(source, SourcePluginReferences.ParseOptions)],
+            SourcePluginReferences.All, SourcePluginReferences.Options.WithAllowUnsafe(allowUnsafe)));
+
     /// <summary>CHSDK diagnostics as a build with the SDK analyzers attached reports them (suppressed ones marked).</summary>
     public static IReadOnlyList<Diagnostic> AnalyzerDiagnostics(string name)
     {
