@@ -31,6 +31,20 @@ public sealed class CouplingsListedRuleTests
     }
 
     [Fact]
+    public void Check_GuideExample_ReportsTheQuartetWithoutJ()
+    {
+        // The example of docs/plugin-authoring.md §4, verbatim (a test there checks it still is).
+        var entry = EntryBuilder.Entry("AIS-LQ-0418").Smiles("CCOC(C)=O")
+            .Spectrum(SpectrumBuilder.Proton(400, "CDCl3").Signal(4.12, "q", 2).Signal(2.05, "s", 3).Signal(1.26, "t", 3, 7.1))
+            .Build();
+
+        var run = RuleHarness.Run<CouplingsListedRule>(entry, new Dictionary<string, string> { ["RequireEveryCoupling"] = "true" });
+        var finding = FindingAssert.HasSingle(run, CouplingsListedCodes.Missing);
+
+        Assert.Equal(4.12, entry.Spectra[0].Signals[finding.Peaks[0].Signal].ShiftPpm);
+    }
+
+    [Fact]
     public void Check_DoubletOfDoubletsWithOneJ_ReportsIncompleteUnlessTheProfileRelaxesIt()
     {
         // 7.76 (dd, J 6.0, 8.2 Hz, 1H): the Acta Chimica Slovenica style page's example, here with one J dropped.
