@@ -3,6 +3,7 @@ using System.Composition;
 using System.Threading;
 using System.Threading.Tasks;
 using ConsistencyHost.Sdk.Analyzers;
+using ConsistencyHost.Sdk.Analyzers.State;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.CodeActions;
 using Microsoft.CodeAnalysis.CodeFixes;
@@ -33,8 +34,8 @@ public sealed class MakeStaticFieldReadOnlyCodeFix : CodeFixProvider
         foreach (var diagnostic in context.Diagnostics)
         {
             var node = root?.FindNode(diagnostic.Location.SourceSpan);
-            if (node?.FirstAncestorOrSelf<FieldDeclarationSyntax>() is { } field && !field.Modifiers.Any(SyntaxKind.ReadOnlyKeyword) &&
-                diagnostic.GetMessage().Contains("not readonly"))
+            if (diagnostic.Properties.ContainsKey(MutableStaticStateAnalyzer.AddReadOnlyProperty) &&
+                node?.FirstAncestorOrSelf<FieldDeclarationSyntax>() is { } field && !field.Modifiers.Any(SyntaxKind.ReadOnlyKeyword))
             {
                 context.RegisterCodeFix(
                     CodeAction.Create(Title, ct => AddReadOnly(context.Document, field, ct), equivalenceKey: Title),

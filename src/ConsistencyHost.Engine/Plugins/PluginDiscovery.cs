@@ -119,7 +119,7 @@ public static class PluginDiscovery
         var problems = RuleMetadataValidator.Problems(metadata);
         if (problems.Count > 0)
         {
-            return Refused(plugin, $"rule class {type.FullName}: " + string.Join("; ", problems), metadata.Id ?? type.Name);
+            return Refused(plugin, $"CHSDK0002: rule class {type.FullName}: " + string.Join("; ", problems), metadata.Id ?? type.Name);
         }
 
         if (type.GetConstructor(Type.EmptyTypes) is null)

@@ -7,8 +7,11 @@ namespace ConsistencyHost.Engine.Vetting;
 /// Decodes signature types into the spelling of documentation comment ids (C# standard, annex D.4.2):
 /// <c>System.Int32</c>, <c>System.Byte[]</c>, <c>System.Func{``0}</c>, <c>`0</c>, <c>System.Int32@</c>.
 /// </summary>
-internal sealed class DocIdSignatureProvider(MetadataReader reader) : ISignatureTypeProvider<string, object?>
+internal sealed class DocIdSignatureProvider : ISignatureTypeProvider<string, object?>
 {
+    /// <summary>The provider holds no state; one instance serves every reader.</summary>
+    public static DocIdSignatureProvider Instance { get; } = new();
+
     public string GetPrimitiveType(PrimitiveTypeCode typeCode) => "System." + typeCode switch
     {
         PrimitiveTypeCode.IntPtr => "IntPtr",
@@ -49,7 +52,4 @@ internal sealed class DocIdSignatureProvider(MetadataReader reader) : ISignature
     public string GetGenericTypeParameter(object? genericContext, int index) => "`" + index;
 
     public string GetFunctionPointerType(MethodSignature<string> signature) => "=FUNC:" + signature.ReturnType;
-
-    /// <summary>The reader this provider decodes for (kept for symmetry with the handles it resolves).</summary>
-    public MetadataReader Reader { get; } = reader;
 }

@@ -18,7 +18,7 @@ internal static class MemberIds
             yield break;
         }
 
-        var signature = member.DecodeMethodSignature(new DocIdSignatureProvider(reader), null);
+        var signature = member.DecodeMethodSignature(DocIdSignatureProvider.Instance, null);
         var docName = name switch { ".ctor" => "#ctor", ".cctor" => "#cctor", _ => name };
         var arity = signature.GenericParameterCount > 0 ? "``" + signature.GenericParameterCount : "";
         var parameters = signature.ParameterTypes.Length > 0 ? "(" + string.Join(",", signature.ParameterTypes) + ")" : "";

@@ -28,7 +28,7 @@ internal static class StaticState
         var display = isProperty ? name[1..^BackingFieldSuffix.Length] : name;
         var why = (field.Attributes & FieldAttributes.InitOnly) == 0
             ? isProperty ? "a static auto-property with a setter" : "a static field that is not readonly"
-            : MutableTypeReason(field.DecodeSignature(new DocIdSignatureProvider(reader), null));
+            : MutableTypeReason(field.DecodeSignature(DocIdSignatureProvider.Instance, null));
         return why is null
             ? null
             : new VettingProblem(Descriptors.MutableStaticState.Id, MetadataNames.Of(reader, typeHandle).FullName + "." + display,

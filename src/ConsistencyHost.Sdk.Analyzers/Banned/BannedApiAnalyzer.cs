@@ -89,7 +89,7 @@ public sealed class BannedApiAnalyzer : DiagnosticAnalyzer
 
     private static void CheckCompilation(CompilationAnalysisContext context, BannedSymbolIndex index)
     {
-        if (context.Compilation.Options is CSharpCompilationOptions { AllowUnsafe: true } && Entry(index, UnverifiableCodeId) is { } entry)
+        if (context.Compilation.Options is CSharpCompilationOptions { AllowUnsafe: true } && index.ById(UnverifiableCodeId) is { } entry)
         {
             context.ReportDiagnostic(Create(entry, "unsafe code (AllowUnsafeBlocks)", Location.None));
         }
@@ -103,9 +103,6 @@ public sealed class BannedApiAnalyzer : DiagnosticAnalyzer
             }
         }
     }
-
-    private static BannedApiEntry? Entry(BannedSymbolIndex index, string documentationId) =>
-        index.ById(documentationId);
 
     private static Diagnostic Create(BannedApiEntry entry, string used, Location location) =>
         Diagnostic.Create(entry.IsNondeterminism ? Descriptors.Nondeterminism : Descriptors.BannedApi, location,

@@ -13,6 +13,12 @@ namespace ConsistencyHost.Sdk.Analyzers.State;
 [DiagnosticAnalyzer(LanguageNames.CSharp)]
 public sealed class MutableStaticStateAnalyzer : DiagnosticAnalyzer
 {
+    /// <summary>Diagnostic property set when adding <c>readonly</c> fixes the problem; read by the code fix.</summary>
+    public const string AddReadOnlyProperty = "AddReadOnly";
+
+    private static readonly ImmutableDictionary<string, string?> ReadOnlyFixable =
+        ImmutableDictionary<string, string?>.Empty.Add(AddReadOnlyProperty, "true");
+
     /// <inheritdoc />
     public override ImmutableArray<DiagnosticDescriptor> SupportedDiagnostics { get; } = ImmutableArray.Create(Descriptors.MutableStaticState);
 
@@ -42,7 +48,10 @@ public sealed class MutableStaticStateAnalyzer : DiagnosticAnalyzer
         var why = !field.IsReadOnly ? "a static field that is not readonly" : MutableTypeReason(field.Type);
         if (why is not null)
         {
-            context.ReportDiagnostic(Diagnostic.Create(Descriptors.MutableStaticState, field.Locations[0], Name(field), why));
+            // Adding readonly is a complete fix only when the field's type is not itself mutable.
+            var fixable = !field.IsReadOnly && MutableTypeReason(field.Type) is null;
+            var properties = fixable ? ReadOnlyFixable : ImmutableDictionary<string, string?>.Empty;
+            context.ReportDiagnostic(Diagnostic.Create(Descriptors.MutableStaticState, field.Locations[0], properties, Name(field), why));
         }
     }
 
