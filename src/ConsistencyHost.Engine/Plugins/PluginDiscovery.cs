@@ -57,10 +57,30 @@ public static class PluginDiscovery
         }
     }
 
+    /// <summary>
+    /// Compiling hostile source can take unbounded time; a lab's plugin compiles in well under a second once
+    /// Roslyn is warm (about five seconds for the first one in a process), so two minutes only stops a runaway.
+    /// </summary>
+    private static readonly TimeSpan SourceCompileLimit = TimeSpan.FromMinutes(2);
+
     private static IReadOnlyList<RuleDescriptor> LoadSource(string folder, SourcePluginCompiler compiler)
     {
         var plugin = Path.GetFileName(folder) + " (source)";
-        var result = compiler.Compile(folder);
+        using var limit = new CancellationTokenSource(SourceCompileLimit);
+        SourcePluginResult result;
+        try
+        {
+            result = compiler.Compile(folder, limit.Token);
+        }
+        catch (OperationCanceledException) when (limit.IsCancellationRequested)
+        {
+            return [Refused(plugin, $"refused by source vetting: compiling took longer than {SourceCompileLimit.TotalSeconds:0} s")];
+        }
+        catch (IOException exception)
+        {
+            return [Refused(plugin, $"could not be read: {exception.Message}")];
+        }
+
         return result.IsAccepted
             ? LoadPlugin(result.AssemblyPath!, [], plugin)
             : [Refused(plugin, "refused by source vetting: " + string.Join("; ", result.Problems))];

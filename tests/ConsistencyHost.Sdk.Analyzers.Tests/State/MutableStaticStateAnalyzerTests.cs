@@ -48,4 +48,19 @@ public sealed class MutableStaticStateAnalyzerTests
             "internal static class Limits { internal static double {|#0:Tolerance|} = 0.3; }",
             "internal static class Limits { internal static readonly double Tolerance = 0.3; }",
             Verify.Diagnostic(Descriptors.MutableStaticState).WithLocation(0).WithArguments("Limits.Tolerance", "a static field that is not readonly"));
+
+    [Fact]
+    public Task Fix_ReadonlyListField_OffersNothingBecauseReadonlyIsNoCure() =>
+        Verify.CodeFix<MakeStaticFieldReadOnlyCodeFix>(
+            "internal static class Cache { internal static readonly List<double> {|#0:Seen|} = new(); }",
+            "internal static class Cache { internal static readonly List<double> {|#0:Seen|} = new(); }",
+            Verify.Diagnostic(Descriptors.MutableStaticState).WithLocation(0)
+                .WithArguments("Cache.Seen", "a static of the mutable type 'System.Collections.Generic.List<double>'; use an immutable or frozen collection"));
+
+    [Fact]
+    public Task Fix_MutableListFieldNotReadonly_OffersNothing() =>
+        Verify.CodeFix<MakeStaticFieldReadOnlyCodeFix>(
+            "internal static class Cache { internal static List<double> {|#0:Seen|} = new(); }",
+            "internal static class Cache { internal static List<double> {|#0:Seen|} = new(); }",
+            Verify.Diagnostic(Descriptors.MutableStaticState).WithLocation(0).WithArguments("Cache.Seen", "a static field that is not readonly"));
 }
