@@ -50,7 +50,7 @@ public sealed class BannedApiList
             var entry = ParseLine(line, i + 1, problems);
             if (entry is not null && !seen.Add(entry.DocumentationId))
             {
-                problems.Add($"line {i + 1}: '{entry.DocumentationId}' is listed twice");
+                problems.Add(BannedApiListMessages.Duplicate(i + 1, entry.DocumentationId));
             }
             else if (entry is not null)
             {
@@ -60,7 +60,7 @@ public sealed class BannedApiList
 
         return problems.Count == 0
             ? new BannedApiList(entries)
-            : throw new FormatException("The banned-API list is malformed: " + string.Join("; ", problems));
+            : throw new FormatException(BannedApiListMessages.Malformed + string.Join("; ", problems));
     }
 
     private static BannedApiEntry? ParseLine(string line, int number, List<string> problems)
@@ -69,7 +69,7 @@ public sealed class BannedApiList
         var colon = semicolon < 0 ? -1 : line.IndexOf(':', semicolon);
         if (semicolon < 0 || colon < 0)
         {
-            problems.Add($"line {number}: expected '{{id}};{{category}}: {{reason}}' but got '{line}'");
+            problems.Add(BannedApiListMessages.ExpectedFormat(number, line));
             return null;
         }
 
@@ -78,13 +78,13 @@ public sealed class BannedApiList
         var reason = line.Substring(colon + 1).Trim();
         if (id.Length < 3 || id[1] != ':' || "NTMPFE".IndexOf(id[0]) < 0)
         {
-            problems.Add($"line {number}: '{id}' is not a documentation id (expected N:, T:, M:, P:, F: or E: and a name)");
+            problems.Add(BannedApiListMessages.NotADocumentationId(number, id));
             return null;
         }
 
         if (!Categories.Contains(category) || reason.Length == 0)
         {
-            problems.Add($"line {number}: expected a category ({string.Join(", ", Categories)}) and a reason, got '{category}: {reason}'");
+            problems.Add(BannedApiListMessages.BadCategoryOrReason(number, Categories, category, reason));
             return null;
         }
 

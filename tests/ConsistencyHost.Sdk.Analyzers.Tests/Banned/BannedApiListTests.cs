@@ -39,8 +39,7 @@ public sealed class BannedApiListTests
     {
         var error = Assert.Throws<FormatException>(() => BannedApiList.Parse("// comment\nT:System.IO.File;reads files\n"));
 
-        Assert.Contains("line 2", error.Message);
-        Assert.Contains("{id};{category}: {reason}", error.Message);
+        Assert.Equal(BannedApiListMessages.Malformed + BannedApiListMessages.ExpectedFormat(2, "T:System.IO.File;reads files"), error.Message);
     }
 
     [Fact]
@@ -50,8 +49,17 @@ public sealed class BannedApiListTests
 
         var error = Assert.Throws<FormatException>(() => BannedApiList.Parse(text));
 
-        Assert.Contains("line 1", error.Message);
-        Assert.Contains("line 3: 'M:System.Guid.NewGuid' is listed twice", error.Message);
+        Assert.Equal(BannedApiListMessages.Malformed +
+                     BannedApiListMessages.BadCategoryOrReason(1, BannedApiList.Categories, "disk", "reads files") + "; " +
+                     BannedApiListMessages.Duplicate(3, "M:System.Guid.NewGuid"), error.Message);
+    }
+
+    [Fact]
+    public void Parse_IdWithoutKindPrefix_NamesTheLineAndTheExpectedPrefixes()
+    {
+        var error = Assert.Throws<FormatException>(() => BannedApiList.Parse("System.IO.File;file-system: reads files"));
+
+        Assert.Equal(BannedApiListMessages.Malformed + BannedApiListMessages.NotADocumentationId(1, "System.IO.File"), error.Message);
     }
 
     [Fact]
