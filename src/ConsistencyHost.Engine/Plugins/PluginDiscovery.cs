@@ -65,7 +65,8 @@ public static class PluginDiscovery
 
     private static IReadOnlyList<RuleDescriptor> LoadSource(string folder, SourcePluginCompiler compiler)
     {
-        var plugin = Path.GetFileName(folder) + " (source)";
+        var name = Path.GetFileName(folder);
+        var plugin = name + SourceSuffix;
         using var limit = new CancellationTokenSource(SourceCompileLimit);
         SourcePluginResult result;
         try
@@ -74,16 +75,16 @@ public static class PluginDiscovery
         }
         catch (OperationCanceledException) when (limit.IsCancellationRequested)
         {
-            return [Refused(plugin, $"refused by source vetting: compiling took longer than {SourceCompileLimit.TotalSeconds:0} s")];
+            return [Refused(plugin, $"refused by source vetting: compiling took longer than {SourceCompileLimit.TotalSeconds:0} s", name)];
         }
         catch (IOException exception)
         {
-            return [Refused(plugin, $"could not be read: {exception.Message}")];
+            return [Refused(plugin, $"could not be read: {exception.Message}", name)];
         }
 
         return result.IsAccepted
             ? LoadPlugin(result.AssemblyPath!, [], plugin)
-            : [Refused(plugin, "refused by source vetting: " + string.Join("; ", result.Problems))];
+            : [Refused(plugin, "refused by source vetting: " + string.Join("; ", result.Problems), name)];
     }
 
     private static string? Vet(IReadOnlyList<string> assemblies)
@@ -160,8 +161,14 @@ public static class PluginDiscovery
         };
     }
 
+    private const string SourceSuffix = " (source)";
+
     private static RuleDescriptor Refused(string plugin, string reason, string? id = null) =>
-        new() { Id = id ?? Path.GetFileNameWithoutExtension(plugin), Plugin = plugin, LoadMessage = reason };
+        new() { Id = id ?? PluginName(plugin), Plugin = plugin, LoadMessage = reason };
+
+    /// <summary>"Lab.Rules.dll" → "Lab.Rules"; "Lab.Rules (source)" → "Lab.Rules".</summary>
+    private static string PluginName(string plugin) =>
+        plugin.EndsWith(SourceSuffix, StringComparison.Ordinal) ? plugin[..^SourceSuffix.Length] : Path.GetFileNameWithoutExtension(plugin);
 
     private static IReadOnlyList<RuleDescriptor> RefuseDuplicateIds(List<RuleDescriptor> found)
     {

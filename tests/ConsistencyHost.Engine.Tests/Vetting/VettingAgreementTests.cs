@@ -62,6 +62,7 @@ public sealed class VettingAgreementTests
 
         Assert.False(rule.IsLoaded);
         Assert.Equal(plugin + " (source)", rule.Plugin);
+        Assert.Equal(plugin, rule.Id);
         Assert.Contains(code, rule.LoadMessage);
         Assert.Contains(api, rule.LoadMessage);
         // Source vetting points at the file and line, e.g. "at ReadsFileRule.cs(10,23)".
