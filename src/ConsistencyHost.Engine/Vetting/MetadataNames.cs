@@ -63,17 +63,17 @@ internal static partial class MetadataNames
     public static string DescribeMember(MetadataReader reader, TypeDefinitionHandle declaring, string memberName)
     {
         var type = reader.GetTypeDefinition(declaring);
-        var typeName = reader.GetString(type.Name);
         var outer = type.GetDeclaringType();
-        if (!outer.IsNil && typeName.StartsWith('<'))
+        if (!outer.IsNil && reader.GetString(type.Name).StartsWith('<'))
         {
-            var origin = CompilerGeneratedPrefix().Match(typeName) is { Success: true } fromType && !fromType.Groups["name"].Value.StartsWith('>')
-                ? fromType.Groups["name"].Value
-                : CompilerGeneratedPrefix().Match(memberName) is { Success: true } fromMember ? fromMember.Groups["name"].Value : memberName;
-            return DescribeMember(reader, outer, origin);
+            // <Check>d__3 (an iterator) names its method; <>c and display classes do not, their members do.
+            return DescribeMember(reader, outer, Origin(reader.GetString(type.Name)) ?? Origin(memberName) ?? memberName);
         }
 
-        var origin2 = CompilerGeneratedPrefix().Match(memberName) is { Success: true } local ? local.Groups["name"].Value : memberName;
-        return Of(reader, declaring).FullName + "." + origin2;
+        return Of(reader, declaring).FullName + "." + (Origin(memberName) ?? memberName);
     }
+
+    /// <summary>"&lt;Check&gt;b__0_0" → "Check"; null for names that carry no method ("&lt;&gt;c", plain names).</summary>
+    private static string? Origin(string generatedName) =>
+        CompilerGeneratedPrefix().Match(generatedName) is { Success: true } match ? match.Groups["name"].Value : null;
 }
