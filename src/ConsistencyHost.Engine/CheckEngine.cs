@@ -20,7 +20,7 @@ public sealed class CheckEngine
     public CheckEngine(EngineOptions options, IntakeLimits? limits = null)
     {
         Options = options;
-        Rules = PluginDiscovery.Discover(options.PluginsPath);
+        Rules = PluginDiscovery.Discover(options.PluginsPath, options.SourcePluginCachePath);
         _profiles = ProfileResolver.ResolveAll(options, Rules);
         _intake = new EntryIntake(limits ?? IntakeLimits.Default);
     }

@@ -8,6 +8,13 @@ public sealed record EngineOptions
     /// <summary>The folder holding one sub-folder per plugin.</summary>
     public required string PluginsPath { get; init; }
 
+    /// <summary>
+    /// Where source plugins (folders of <c>.cs</c> files) are cached once compiled and vetted; null for a
+    /// folder under the machine's temporary folder. Entries are keyed by a hash of the sources, the compiler,
+    /// the SDK and the analyzers, so a stale entry is never reused.
+    /// </summary>
+    public string? SourcePluginCachePath { get; init; }
+
     /// <summary>The profile used when a request names none.</summary>
     public string DefaultProfile { get; init; } = Profile.DefaultName;
 

@@ -17,7 +17,7 @@ internal sealed class PluginFolder : IDisposable
         Directory.CreateDirectory(path);
         foreach (var name in pluginNames)
         {
-            var source = new[] { RepoPaths.BuiltInPlugins, RepoPaths.FixturePlugins }
+            var source = new[] { RepoPaths.BuiltInPlugins, RepoPaths.FixturePlugins, RepoPaths.SamplePlugins }
                 .Select(root => System.IO.Path.Combine(root, name))
                 .FirstOrDefault(Directory.Exists) ?? throw new InvalidOperationException($"plugin {name} has not been built");
             CopyDirectory(source, System.IO.Path.Combine(path, name));

@@ -11,6 +11,9 @@ internal static class RepoPaths
     /// <summary>The hostile and broken fixture plugins.</summary>
     public static string FixturePlugins => Path.Combine(Root, "artifacts", "test-plugins");
 
+    /// <summary>The sample lab's plugins (samples/plugins), built like any lab's plugin.</summary>
+    public static string SamplePlugins => Path.Combine(Root, "artifacts", "sample-plugins");
+
     public static string Samples => Path.Combine(Root, "samples");
 
     private static string FindRoot()

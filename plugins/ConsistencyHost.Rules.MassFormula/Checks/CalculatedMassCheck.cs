@@ -53,8 +53,8 @@ internal static class CalculatedMassCheck
         var tail = fitsWritten
             ? $" The calculated value is that of the written formula ({MassText.Mz(writtenIon.Mz)}), not of the structure's ion ({MassText.Mz(ion.Mz)})."
             : Fits(c, ion.Mz) ? " The calculated value itself fits the structure's ion; only the written formula is wrong." : "";
-        return c.Finding(MassFormulaCodes.IonFormulaMismatch, Severity.Error,
-                $"{c.Name}: the ion formula {c.Claim.IonFormula} is not {c.Molecule!.Description} as {c.Ion.Label!.Canonical}, which is {ion.Hill}.{tail}")
+        return c.Locate(new Finding(MassFormulaCodes.IonFormulaMismatch, Severity.Error,
+                $"{c.Name}: the ion formula {c.Claim.IonFormula} is not {c.Molecule!.Description} as {c.Ion.Label!.Canonical}, which is {ion.Hill}.{tail}"))
             .WithEvidence("expected_ion_formula", ion.Hill)
             .WithEvidence("reported_ion_formula", c.Claim.IonFormula)
             .WithEvidence("expected_mz", MassText.Mz(ion.Mz))
@@ -64,19 +64,19 @@ internal static class CalculatedMassCheck
     }
 
     private static Finding ElectronMassOmitted(ClaimContext c, Ion ion) =>
-        c.Finding(MassFormulaCodes.ElectronMassOmitted, Severity.Warning,
+        c.Locate(new Finding(MassFormulaCodes.ElectronMassOmitted, Severity.Warning,
                 $"{c.Name}: the calculated value is that of {ion.Hill} ({c.IonSource}) without the electron mass ({MassText.Mz(ion.MzWithoutElectron)}); " +
-                $"with it, m/z is {MassText.Mz(ion.Mz)}. An ion's mass is its atoms' masses {(ion.Charge > 0 ? "minus" : "plus")} one electron (0.000549 u) per charge.")
+                $"with it, m/z is {MassText.Mz(ion.Mz)}. An ion's mass is its atoms' masses {(ion.Charge > 0 ? "minus" : "plus")} one electron (0.000549 u) per charge."))
             .WithEvidence("expected_mz", MassText.Mz(ion.Mz))
             .WithEvidence("reported_mz", MassText.Reported(c.Claim.CalculatedMz, c.Claim.CalculatedDecimals))
             .WithEvidence("mz_without_electron", MassText.Mz(ion.MzWithoutElectron))
             .WithEvidence("difference_mda", MassText.MilliDaltons(c.Claim.CalculatedMz - ion.Mz));
 
     private static Finding CalculatedMassMismatch(ClaimContext c, Ion ion) =>
-        c.Finding(MassFormulaCodes.CalculatedMassMismatch, Severity.Error,
+        c.Locate(new Finding(MassFormulaCodes.CalculatedMassMismatch, Severity.Error,
                 $"{c.Name}: m/z of {ion.Hill} ({c.IonSource}) is {MassText.Mz(ion.Mz)}; the reported calculated value differs by " +
                 $"{MassText.MilliDaltons(c.Claim.CalculatedMz - ion.Mz)} mDa, more than rounding to {c.Claim.CalculatedDecimals} decimals explains " +
-                $"(tolerance {MassText.MilliDaltons(c.Tolerance)} mDa).")
+                $"(tolerance {MassText.MilliDaltons(c.Tolerance)} mDa)."))
             .WithEvidence("expected_mz", MassText.Mz(ion.Mz))
             .WithEvidence("reported_mz", MassText.Reported(c.Claim.CalculatedMz, c.Claim.CalculatedDecimals))
             .WithEvidence("expected_ion_formula", ion.Hill)

@@ -30,9 +30,9 @@ internal sealed record ClaimContext(
         ? $"{Molecule.Description} as {Ion.Label.Canonical}"
         : $"the written formula {Claim.IonFormula}";
 
-    /// <summary>A finding located at this claim: its index, source offset and ion label as evidence.</summary>
-    public Finding Finding(string code, Severity severity, string message) =>
-        new Finding(code, severity, message)
+    /// <summary>The finding located at this claim: its index, source offset and ion label added as evidence.</summary>
+    public Finding Locate(Finding finding) =>
+        finding
             .WithEvidence("hrms_index", Index)
             .WithEvidence("source_offset", Claim.SourceOffset)
             .WithEvidence("ion", Ion.Label?.Canonical ?? Claim.IonLabel ?? "");

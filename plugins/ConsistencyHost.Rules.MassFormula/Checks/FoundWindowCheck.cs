@@ -31,9 +31,9 @@ internal static class FoundWindowCheck
             yield break;
         }
 
-        yield return c.Finding(MassFormulaCodes.FoundOutsideWindow, Severity.Warning,
+        yield return c.Locate(new Finding(MassFormulaCodes.FoundOutsideWindow, Severity.Warning,
                 string.Create(CultureInfo.InvariantCulture,
-                    $"{c.Name}: found {MassText.Reported(found, c.Claim.FoundDecimals)} is {MassText.Ppm(ppm)} ppm ({MassText.MilliDaltons(difference)} mDa) from {what}; the window is ±{window} ppm."))
+                    $"{c.Name}: found {MassText.Reported(found, c.Claim.FoundDecimals)} is {MassText.Ppm(ppm)} ppm ({MassText.MilliDaltons(difference)} mDa) from {what}; the window is ±{window} ppm.")))
             .WithEvidence("expected_mz", MassText.Mz(reference))
             .WithEvidence("found_mz", MassText.Reported(found, c.Claim.FoundDecimals))
             .WithEvidence("difference_ppm", MassText.Ppm(ppm))

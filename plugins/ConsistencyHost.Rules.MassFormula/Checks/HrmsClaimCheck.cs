@@ -14,15 +14,15 @@ internal static class HrmsClaimCheck
         var context = new ClaimContext(claim, index, written, ion, molecule, tolerance, options);
         if (unreadable is not null)
         {
-            yield return context.Finding(MassFormulaCodes.IonFormulaUnreadable, Severity.Warning,
-                    $"{context.Name}: the ion formula '{claim.IonFormula}' cannot be read ({unreadable}); only the m/z values are checked.")
+            yield return context.Locate(new Finding(MassFormulaCodes.IonFormulaUnreadable, Severity.Warning,
+                    $"{context.Name}: the ion formula '{claim.IonFormula}' cannot be read ({unreadable}); only the m/z values are checked."))
                 .WithEvidence("reported_ion_formula", claim.IonFormula);
         }
 
         if (ion.Problem is not null)
         {
-            yield return context.Finding(MassFormulaCodes.IonNotRecognised, Severity.Info,
-                $"{context.Name}: the ion is not recognised ({ion.Problem}); the calculated value is not checked.");
+            yield return context.Locate(new Finding(MassFormulaCodes.IonNotRecognised, Severity.Info,
+                $"{context.Name}: the ion is not recognised ({ion.Problem}); the calculated value is not checked."));
         }
 
         foreach (var finding in CalculatedMassCheck.Check(context).Concat(FoundWindowCheck.Check(context)))

@@ -7,7 +7,7 @@ namespace ConsistencyHost.Rules.MassFormula.Checks;
 internal static class IonResolver
 {
     /// <summary>The ions tried, in this order, when a line states no ion label (common practice for ESI, then EI).</summary>
-    private static readonly string[] CommonLabels = ["[M+H]+", "[M+Na]+", "[M+K]+", "[M+NH4]+", "[M-H]-", "M+•"];
+    private static readonly IReadOnlyList<string> CommonLabels = ["[M+H]+", "[M+Na]+", "[M+K]+", "[M+NH4]+", "[M-H]-", "M+•"];
 
     public static ResolvedIon Resolve(HrmsClaim claim, WrittenIonFormula? written, MoleculeReference? molecule, double tolerance)
     {

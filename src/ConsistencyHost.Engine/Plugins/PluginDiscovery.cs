@@ -1,37 +1,45 @@
 using System.Reflection;
+using ConsistencyHost.Engine.Vetting;
 using ConsistencyHost.Sdk.Rules;
 
 namespace ConsistencyHost.Engine.Plugins;
 
 /// <summary>
 /// Finds rule plugins in a folder: every sub-folder is one plugin whose main assembly has the folder's
-/// name (as <c>dotnet build</c> lays it out); a bare <c>.dll</c> in the folder itself is a plugin too.
-/// A plugin that cannot be loaded is listed as refused with its reason; it never stops the host.
+/// name (as <c>dotnet build</c> lays it out); a bare <c>.dll</c> in the folder itself is a plugin too, and
+/// a sub-folder with <c>.cs</c> files but no such assembly is a source plugin, compiled by the host.
+/// Every plugin is vetted against the SDK's banned list before anything of it is loaded. A plugin that is
+/// refused or cannot be loaded is listed with its reason; it never stops the host.
 /// </summary>
 public static class PluginDiscovery
 {
-    /// <summary>Discovers and loads every plugin under <paramref name="pluginsPath"/>, ordered by rule id.</summary>
-    public static IReadOnlyList<RuleDescriptor> Discover(string pluginsPath)
+    /// <summary>Discovers, vets and loads every plugin under <paramref name="pluginsPath"/>, ordered by rule id.</summary>
+    /// <param name="pluginsPath">The plugin folder.</param>
+    /// <param name="sourceCacheRoot">Where compiled source plugins are cached; default <see cref="SourcePluginCompiler.DefaultCacheRoot"/>.</param>
+    public static IReadOnlyList<RuleDescriptor> Discover(string pluginsPath, string? sourceCacheRoot = null)
     {
         if (!Directory.Exists(pluginsPath))
         {
             return [];
         }
 
+        var compiler = new SourcePluginCompiler(sourceCacheRoot ?? SourcePluginCompiler.DefaultCacheRoot);
         var found = new List<RuleDescriptor>();
-        foreach (var assemblyPath in MainAssemblies(pluginsPath))
+        foreach (var candidate in Candidates(pluginsPath))
         {
-            found.AddRange(LoadPlugin(assemblyPath));
+            found.AddRange(candidate.SourceFolder is { } folder ? LoadSource(folder, compiler) : LoadPlugin(candidate.AssemblyPath!, candidate.Vetted));
         }
 
         return RefuseDuplicateIds(found);
     }
 
-    private static IEnumerable<string> MainAssemblies(string pluginsPath)
+    private sealed record Candidate(string? AssemblyPath, string? SourceFolder, IReadOnlyList<string> Vetted);
+
+    private static IEnumerable<Candidate> Candidates(string pluginsPath)
     {
         foreach (var dll in Directory.EnumerateFiles(pluginsPath, "*.dll").Order(StringComparer.Ordinal))
         {
-            yield return dll;
+            yield return new Candidate(dll, null, [dll]);
         }
 
         foreach (var folder in Directory.EnumerateDirectories(pluginsPath).Order(StringComparer.Ordinal))
@@ -39,17 +47,66 @@ public static class PluginDiscovery
             var main = Path.Combine(folder, Path.GetFileName(folder) + ".dll");
             if (File.Exists(main))
             {
-                yield return main;
+                // The plugin's own dependencies run in its context too, so they are vetted with it.
+                yield return new Candidate(main, null, [.. Directory.EnumerateFiles(folder, "*.dll", SearchOption.AllDirectories).Order(StringComparer.Ordinal)]);
+            }
+            else if (SourceFiles.IsSourcePlugin(folder))
+            {
+                yield return new Candidate(null, folder, []);
             }
         }
     }
 
-    private static IReadOnlyList<RuleDescriptor> LoadPlugin(string assemblyPath)
+    /// <summary>
+    /// Compiling hostile source can take unbounded time; a lab's plugin compiles in well under a second once
+    /// Roslyn is warm (about five seconds for the first one in a process), so two minutes only stops a runaway.
+    /// </summary>
+    private static readonly TimeSpan SourceCompileLimit = TimeSpan.FromMinutes(2);
+
+    private static IReadOnlyList<RuleDescriptor> LoadSource(string folder, SourcePluginCompiler compiler)
     {
-        var plugin = Path.GetFileName(assemblyPath);
+        var name = Path.GetFileName(folder);
+        var plugin = name + SourceSuffix;
+        using var limit = new CancellationTokenSource(SourceCompileLimit);
+        SourcePluginResult result;
         try
         {
-            var refusal = SdkCompatibility.Check(assemblyPath);
+            result = compiler.Compile(folder, limit.Token);
+        }
+        catch (OperationCanceledException) when (limit.IsCancellationRequested)
+        {
+            return [Refused(plugin, $"refused by source vetting: compiling took longer than {SourceCompileLimit.TotalSeconds:0} s", name)];
+        }
+        catch (IOException exception)
+        {
+            return [Refused(plugin, $"could not be read: {exception.Message}", name)];
+        }
+
+        return result.IsAccepted
+            ? LoadPlugin(result.AssemblyPath!, [], plugin)
+            : [Refused(plugin, "refused by source vetting: " + string.Join("; ", result.Problems), name)];
+    }
+
+    private static string? Vet(IReadOnlyList<string> assemblies)
+    {
+        foreach (var path in assemblies)
+        {
+            var result = CompiledPluginVetter.Default.Vet(path);
+            if (!result.IsAccepted)
+            {
+                return $"refused by vetting of {Path.GetFileName(path)}: {result.Reason}";
+            }
+        }
+
+        return null;
+    }
+
+    private static IReadOnlyList<RuleDescriptor> LoadPlugin(string assemblyPath, IReadOnlyList<string> vetted, string? pluginName = null)
+    {
+        var plugin = pluginName ?? Path.GetFileName(assemblyPath);
+        try
+        {
+            var refusal = SdkCompatibility.Check(assemblyPath) ?? Vet(vetted);
             if (refusal is not null)
             {
                 return [Refused(plugin, refusal)];
@@ -77,13 +134,13 @@ public static class PluginDiscovery
         var metadata = type.GetCustomAttribute<RuleAttribute>();
         if (metadata is null)
         {
-            return Refused(plugin, $"rule class {type.FullName} has no [Rule] metadata", type.Name);
+            return Refused(plugin, $"CHSDK0001: rule class {type.FullName} has no [Rule] metadata", type.Name);
         }
 
         var problems = RuleMetadataValidator.Problems(metadata);
         if (problems.Count > 0)
         {
-            return Refused(plugin, $"rule class {type.FullName}: " + string.Join("; ", problems), metadata.Id ?? type.Name);
+            return Refused(plugin, $"CHSDK0002: rule class {type.FullName}: " + string.Join("; ", problems), metadata.Id ?? type.Name);
         }
 
         if (type.GetConstructor(Type.EmptyTypes) is null)
@@ -104,8 +161,14 @@ public static class PluginDiscovery
         };
     }
 
+    private const string SourceSuffix = " (source)";
+
     private static RuleDescriptor Refused(string plugin, string reason, string? id = null) =>
-        new() { Id = id ?? Path.GetFileNameWithoutExtension(plugin), Plugin = plugin, LoadMessage = reason };
+        new() { Id = id ?? PluginName(plugin), Plugin = plugin, LoadMessage = reason };
+
+    /// <summary>"Lab.Rules.dll" → "Lab.Rules"; "Lab.Rules (source)" → "Lab.Rules".</summary>
+    private static string PluginName(string plugin) =>
+        plugin.EndsWith(SourceSuffix, StringComparison.Ordinal) ? plugin[..^SourceSuffix.Length] : Path.GetFileNameWithoutExtension(plugin);
 
     private static IReadOnlyList<RuleDescriptor> RefuseDuplicateIds(List<RuleDescriptor> found)
     {

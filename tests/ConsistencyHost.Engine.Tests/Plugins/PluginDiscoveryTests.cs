@@ -1,4 +1,5 @@
 using ConsistencyHost.Engine.Plugins;
+using ConsistencyHost.Engine.Tests.Vetting;
 using ConsistencyHost.Tests.Shared;
 
 namespace ConsistencyHost.Engine.Tests.Plugins;
@@ -49,4 +50,41 @@ public sealed class PluginDiscoveryTests
     [Fact]
     public void Discover_MissingFolder_FindsNothing() =>
         Assert.Empty(PluginDiscovery.Discover(Path.Combine(Path.GetTempPath(), "no-such-plugin-folder-" + Guid.NewGuid().ToString("N"))));
+
+    [Fact]
+    public void Discover_RefusedPluginBesideGoodOnes_IsListedAndTheOthersStillLoad()
+    {
+        using var folder = PluginFolder.With("ConsistencyHost.Rules.SpectrumMetadata");
+        VettingCorpus.DropCompiled(folder.Path, "Vetting.ReadsClock", VettingCorpus.Emit(VettingCorpus.Compile("Vetting.ReadsClock")));
+        VettingCorpus.DropSource(folder.Path, "Vetting.Good");
+
+        var rules = PluginDiscovery.Discover(folder.Path, Path.Combine(folder.Path, ".cache"));
+
+        Assert.Equal(["Vetting.ReadsClock", "spectrum-metadata", "vetting-good"], rules.Select(r => r.Id).Order(StringComparer.Ordinal));
+        Assert.Equal(["spectrum-metadata", "vetting-good"], rules.Where(r => r.IsLoaded).Select(r => r.Id).Order(StringComparer.Ordinal));
+        Assert.StartsWith("refused by vetting of Vetting.ReadsClock.dll: CHSDK2001", rules.Single(r => !r.IsLoaded).LoadMessage);
+    }
+
+    [Fact]
+    public void Discover_MalformedRuleId_IsRefusedWithTheAnalyzersWording()
+    {
+        using var folder = PluginFolder.With();
+        VettingCorpus.DropCompiled(folder.Path, "Lab.BadId", VettingCorpus.EmitSource("Lab.BadId", """
+            namespace Lab;
+            [Rule("Bad_Id", "1.0", "Bad")]
+            public sealed class BadIdRule : Rule<NoOptions>
+            {
+                protected override IEnumerable<Finding> Check(IEntryView entry, NoOptions options, CancellationToken cancellationToken)
+                {
+                    cancellationToken.ThrowIfCancellationRequested();
+                    yield break;
+                }
+            }
+            """));
+
+        var rule = Assert.Single(PluginDiscovery.Discover(folder.Path, Path.Combine(folder.Path, ".cache")));
+
+        Assert.Equal("CHSDK0002: rule class Lab.BadIdRule: rule id 'Bad_Id' must be lower-case words joined by hyphens, e.g. 'signal-count'; " +
+                     "rule version '1.0' must be 'major.minor.patch', e.g. '1.0.0'", rule.LoadMessage);
+    }
 }

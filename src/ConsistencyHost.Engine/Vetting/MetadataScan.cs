@@ -1,0 +1,156 @@
+using System.Reflection.Metadata;
+using System.Reflection.PortableExecutable;
+using ConsistencyHost.Sdk.Analyzers;
+using ConsistencyHost.Sdk.Analyzers.Banned;
+
+namespace ConsistencyHost.Engine.Vetting;
+
+/// <summary>
+/// One pass over an assembly's metadata for <see cref="CompiledPluginVetter"/>: method bodies (with the
+/// plugin member each use is attributed to), P/Invoke, attributes, base types and static fields, then every
+/// type reference not yet attributed, so that a banned type used only in a signature is still caught.
+/// </summary>
+internal sealed class MetadataScan(PEReader pe, MetadataReader reader, HostBannedList banned)
+{
+    private const string PInvokeId = "T:System.Runtime.InteropServices.DllImportAttribute";
+    private readonly HashSet<string> _seen = new(StringComparer.Ordinal);
+    private readonly HashSet<string> _typesWithOwner = new(StringComparer.Ordinal);
+
+    public List<VettingProblem> Problems { get; } = [];
+
+    public void Run()
+    {
+        foreach (var typeHandle in reader.TypeDefinitions)
+        {
+            var type = reader.GetTypeDefinition(typeHandle);
+            CheckBaseType(typeHandle, type);
+            foreach (var method in type.GetMethods()) CheckMethod(method);
+            foreach (var field in type.GetFields()) CheckStaticField(typeHandle, field);
+        }
+
+        foreach (var attribute in reader.CustomAttributes) CheckAttribute(reader.GetCustomAttribute(attribute));
+        foreach (var reference in reader.TypeReferences) CheckUnattributedType(reference);
+    }
+
+    private void CheckMethod(MethodDefinitionHandle handle)
+    {
+        var method = reader.GetMethodDefinition(handle);
+        var import = method.GetImport();
+        if (!import.Module.IsNil && banned.ById(PInvokeId) is { } pinvoke)
+        {
+            var library = reader.GetString(reader.GetModuleReference(import.Module).Name);
+            Add(pinvoke, $"P/Invoke into '{library}'", MetadataNames.Describe(reader, handle), null);
+        }
+
+        if (method.RelativeVirtualAddress == 0)
+        {
+            return;
+        }
+
+        var owner = MetadataNames.Describe(reader, handle);
+        var usingType = MetadataNames.Of(reader, method.GetDeclaringType()).FullName;
+        foreach (var token in ILTokens.Of(pe.GetMethodBody(method.RelativeVirtualAddress)))
+        {
+            CheckToken(token, owner, usingType);
+        }
+    }
+
+    private void CheckToken(EntityHandle token, string owner, string usingType)
+    {
+        switch (token.Kind)
+        {
+            case HandleKind.MemberReference:
+                CheckMemberReference((MemberReferenceHandle)token, owner, usingType);
+                break;
+            case HandleKind.MethodSpecification:
+                CheckToken(reader.GetMethodSpecification((MethodSpecificationHandle)token).Method, owner, usingType);
+                break;
+            case HandleKind.TypeReference:
+                var type = MetadataNames.Of(reader, (TypeReferenceHandle)token);
+                if (banned.FindType(type) is { } entry && !Exempted(["T:" + type.FullName], type, usingType)) Add(entry, type.FullName, owner, type);
+                break;
+        }
+    }
+
+    private bool Exempted(IEnumerable<string> usedIds, MetadataTypeName type, string usingType)
+    {
+        if (!usedIds.Append("T:" + type.FullName).Any(id => CompilerSynthesized.IsExempt(id, usingType)))
+        {
+            return false;
+        }
+
+        _typesWithOwner.Add(type.FullName);
+        return true;
+    }
+
+    private void CheckMemberReference(MemberReferenceHandle handle, string owner, string usingType)
+    {
+        var member = reader.GetMemberReference(handle);
+        if (MetadataNames.OfParent(reader, member.Parent) is not { } type)
+        {
+            return;
+        }
+
+        var ids = MemberIds.For(reader, member, type).ToList();
+        if (banned.FindMember(ids, type) is { } entry && !Exempted(ids, type, usingType))
+        {
+            // Name the member as the list does when the list names it (P:System.DateTime.Now, not get_Now).
+            var api = ids.FirstOrDefault(id => id == entry.DocumentationId) ?? ids[0];
+            Add(entry, api[2..], owner, type);
+        }
+    }
+
+    private void CheckBaseType(TypeDefinitionHandle handle, TypeDefinition type)
+    {
+        if (type.BaseType.Kind == HandleKind.TypeReference &&
+            MetadataNames.Of(reader, (TypeReferenceHandle)type.BaseType) is var baseType && banned.FindType(baseType) is { } entry)
+        {
+            Add(entry, baseType.FullName, MetadataNames.Of(reader, handle).FullName, baseType);
+        }
+    }
+
+    private void CheckAttribute(CustomAttribute attribute)
+    {
+        var type = attribute.Constructor.Kind == HandleKind.MemberReference
+            ? MetadataNames.OfParent(reader, reader.GetMemberReference((MemberReferenceHandle)attribute.Constructor).Parent)
+            : null;
+        if (type is not null && banned.FindType(type) is { } entry)
+        {
+            Add(entry, "[" + type.FullName + "]", AttributeOwner(attribute.Parent), type);
+        }
+    }
+
+    private void CheckStaticField(TypeDefinitionHandle typeHandle, FieldDefinitionHandle handle)
+    {
+        if (StaticState.Problem(reader, typeHandle, handle) is { } problem && _seen.Add(problem.ToString()))
+        {
+            Problems.Add(problem);
+        }
+    }
+
+    private void CheckUnattributedType(TypeReferenceHandle handle)
+    {
+        var type = MetadataNames.Of(reader, handle);
+        if (!_typesWithOwner.Contains(type.FullName) && banned.FindType(type) is { } entry)
+        {
+            Add(entry, type.FullName, null, type);
+        }
+    }
+
+    private string? AttributeOwner(EntityHandle parent) => parent.Kind switch
+    {
+        HandleKind.MethodDefinition => MetadataNames.Describe(reader, (MethodDefinitionHandle)parent),
+        HandleKind.TypeDefinition => MetadataNames.Of(reader, (TypeDefinitionHandle)parent).FullName,
+        HandleKind.AssemblyDefinition => "the assembly",
+        HandleKind.ModuleDefinition => "the module",
+        _ => null,
+    };
+
+    private void Add(BannedApiEntry entry, string api, string? owner, MetadataTypeName? type)
+    {
+        if (type is not null && owner is not null) _typesWithOwner.Add(type.FullName);
+        var code = entry.IsNondeterminism ? Descriptors.Nondeterminism.Id : Descriptors.BannedApi.Id;
+        var problem = new VettingProblem(code, api, $"banned by {entry.DocumentationId} ({entry.Explanation})", owner);
+        if (_seen.Add(problem.ToString())) Problems.Add(problem);
+    }
+}

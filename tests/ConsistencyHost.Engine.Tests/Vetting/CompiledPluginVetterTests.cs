@@ -1,0 +1,145 @@
+using ConsistencyHost.Engine.Vetting;
+
+namespace ConsistencyHost.Engine.Tests.Vetting;
+
+public sealed class CompiledPluginVetterTests
+{
+    private static VettingResult Vet(string source, bool allowUnsafe = false) =>
+        CompiledPluginVetter.Default.Vet(new MemoryStream(VettingCorpus.EmitSource("Probe", source, allowUnsafe)));
+
+    [Fact]
+    public void Vet_PInvokeDeclaration_NamesLibraryAndMethod()
+    {
+        var result = Vet("""
+            namespace Lab;
+            public static class Native
+            {
+                [System.Runtime.InteropServices.DllImport("libc")]
+                public static extern int getpid();
+            }
+            """);
+
+        Assert.Contains(result.Problems, p => p is { Code: "CHSDK1001", Api: "P/Invoke into 'libc'", Member: "Lab.Native.getpid" });
+    }
+
+    [Fact]
+    public void Vet_UnsafeCodeEnabled_ReportsTheUnverifiableCodeMarker()
+    {
+        var result = Vet("namespace Lab; public static class Pointers { public static unsafe int Read(int* p) => *p; }", allowUnsafe: true);
+
+        Assert.Contains(result.Problems, p => p.Api == "[System.Security.UnverifiableCodeAttribute]" && p.Member == "the module");
+    }
+
+    [Fact]
+    public void Vet_UnsafeAccessorAndSkipLocalsInit_AreRefusedWithTheirMember()
+    {
+        var result = Vet("""
+            using System.Runtime.CompilerServices;
+            namespace Lab;
+            public static class Sneaky
+            {
+                [UnsafeAccessor(UnsafeAccessorKind.Field, Name = "_items")]
+                public static extern ref object[] Items(List<object> list);
+
+                [SkipLocalsInit]
+                public static int Sum() => 1;
+            }
+            """, allowUnsafe: true);
+
+        Assert.Contains(result.Problems, p => p.Api == "[System.Runtime.CompilerServices.UnsafeAccessorAttribute]" && p.Member == "Lab.Sneaky.Items");
+        Assert.Contains(result.Problems, p => p.Api == "[System.Runtime.CompilerServices.SkipLocalsInitAttribute]" && p.Member == "Lab.Sneaky.Sum");
+    }
+
+    [Fact]
+    public void Vet_BannedBaseType_NamesTheDerivedType()
+    {
+        var result = Vet("namespace Lab; public sealed class Handler : System.Net.Http.HttpClientHandler { }");
+
+        Assert.Contains(result.Problems, p => p is { Code: "CHSDK1001", Api: "System.Net.Http.HttpClientHandler", Member: "Lab.Handler" });
+    }
+
+    [Fact]
+    public void Vet_CallInsideLambda_IsAttributedToTheEnclosingMethod()
+    {
+        var result = Vet("""
+            namespace Lab;
+            public static class Stamps
+            {
+                public static IEnumerable<string> Label(IEnumerable<int> items) => items.Select(i => i + "@" + Guid.NewGuid());
+            }
+            """);
+
+        var problem = Assert.Single(result.Problems);
+        Assert.Equal(("CHSDK2001", "System.Guid.NewGuid", "Lab.Stamps.Label"), (problem.Code, problem.Api, problem.Member));
+    }
+
+    [Fact]
+    public void Vet_SeededRandomAndUnseeded_OnlyUnseededIsRefused()
+    {
+        var result = Vet("""
+            namespace Lab;
+            public static class Draws
+            {
+                public static int Fixed() => new Random(417).Next();
+                public static int Loose() => new Random().Next();
+            }
+            """);
+
+        var problem = Assert.Single(result.Problems);
+        Assert.Equal(("System.Random.#ctor", "Lab.Draws.Loose"), (problem.Api, problem.Member));
+    }
+
+    [Fact]
+    public void Vet_StaticStateOfEveryKind_ReportsFieldsAndAutoProperty()
+    {
+        var result = Vet("""
+            namespace Lab;
+            public static class State
+            {
+                public static readonly List<double> Seen = new();
+                public static double Tolerance { get; set; } = 0.5;
+                public static readonly IReadOnlyList<string> Fine = ["d"];
+                public const string Code = "c";
+            }
+            """);
+
+        Assert.Equal(["Lab.State.Seen", "Lab.State.Tolerance"], result.Problems.Where(p => p.Code == "CHSDK2002").Select(p => p.Api).Order());
+        Assert.Equal(2, result.Problems.Count);
+    }
+
+    [Fact]
+    public void Vet_IteratorLambdaCacheAndCollectionExpression_CompilerGeneratedCodeIsAccepted()
+    {
+        // Iterators read Environment.CurrentManagedThreadId and cache lambdas in static fields of generated types.
+        var result = Vet("""
+            namespace Lab;
+            public static class Generated
+            {
+                public static IEnumerable<int> Evens(IEnumerable<int> items)
+                {
+                    foreach (var item in items.Where(i => i % 2 == 0)) yield return item;
+                }
+
+                public static int First() { ReadOnlySpan<int> span = [1, 2, 3]; return span[0]; }
+            }
+            """);
+
+        Assert.True(result.IsAccepted, result.Reason);
+    }
+
+    [Fact]
+    public void Vet_EnvironmentReadInAuthorsOwnCode_IsRefusedDespiteTheCompilerExemption()
+    {
+        var result = Vet("namespace Lab; public static class Threads { public static int Id() => Environment.CurrentManagedThreadId; }");
+
+        Assert.Contains(result.Problems, p => p is { Api: "System.Environment.get_CurrentManagedThreadId", Member: "Lab.Threads.Id" });
+    }
+
+    [Fact]
+    public void Vet_TextFile_ThrowsBadImageFormatForDiscoveryToReport()
+    {
+        var error = Record.Exception(() => CompiledPluginVetter.Default.Vet(new MemoryStream("not a portable executable"u8.ToArray())));
+
+        Assert.IsType<BadImageFormatException>(error);
+    }
+}
