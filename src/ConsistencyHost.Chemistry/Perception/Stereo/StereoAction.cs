@@ -41,6 +41,9 @@ internal sealed class StereoAction
         }
     }
 
+    /// <summary>Number of atoms of the molecule.</summary>
+    public int AtomCount => tetraAt.Length;
+
     /// <summary>True when at least one tetrahedral element exists (otherwise every automorphism is also reflection-like).</summary>
     public bool HasTetrahedral => tetra.Count > 0;
 

@@ -59,16 +59,17 @@ public sealed class NmrEquivalence
     {
         ArgumentNullException.ThrowIfNull(molecule);
         var ctx = SymmetryContext.Create(molecule);
-        var constitutionalOrbit = OrbitFinder.Orbits(ctx.Search, ctx.Cells, null);
+        var group = ctx.IsRigid ? null : AutomorphismGroup.TryList(ctx);
+        var constitutionalOrbit = group?.Orbits(_ => true) ?? OrbitFinder.Orbits(ctx.Search, ctx.Cells, null);
         var constitutional = new ConstitutionalClasses(constitutionalOrbit, !ctx.Search.BudgetExceeded);
         var (tetra, doubles) = StereoCandidates.Find(ctx);
         var independent = ctx.IsRigid || StereoElementsFixed(constitutionalOrbit, tetra, doubles);
         var stats = new List<ConfigurationStats>();
         var elements = new List<(List<TetrahedralElement>, List<DoubleBondElement>)>();
-        var startCells = ctx.IsRigid ? ctx.Cells : ConfigurationSymmetry.StartCells(ctx, tetra, doubles);
+        var startCells = ctx.IsRigid || group is not null ? ctx.Cells : ConfigurationSymmetry.StartCells(ctx, tetra, doubles);
         foreach (var (t, d) in StereoEnumeration.Configurations(tetra, doubles))
         {
-            stats.Add(ConfigurationStats.Of(molecule, ConfigurationSymmetry.Compute(ctx, t, d, null, startCells), constitutionalOrbit));
+            stats.Add(ConfigurationStats.Of(molecule, ConfigurationSymmetry.Compute(ctx, t, d, null, startCells, group), constitutionalOrbit));
             elements.Add((t, d));
             if (independent)
             {
@@ -77,7 +78,7 @@ public sealed class NmrEquivalence
         }
 
         var best = stats.MaxBy(s => s.HydrogenClassCount)!;
-        var slow = SlowRotation(ctx, elements[stats.IndexOf(best)], constitutionalOrbit);
+        var slow = SlowRotation(ctx, group, elements[stats.IndexOf(best)], constitutionalOrbit);
         var hydrogens = CouplingPartners.Attach(molecule, ctx.Aromaticity, HydrogenClassBuilder.Build(molecule, best.Symmetry));
         var carbons = CarbonClasses(molecule, best.Symmetry.Orbit);
         var unspecified = StereoEnumeration.UnspecifiedCount(tetra, doubles);
@@ -91,7 +92,7 @@ public sealed class NmrEquivalence
 
     /// <summary>The upper-bound configuration with slow amide C–N rotation, or null when there is no such bond.</summary>
     private static (ConfigurationStats Stats, int Bonds)? SlowRotation(
-        SymmetryContext ctx, (List<TetrahedralElement> Tetra, List<DoubleBondElement> Doubles) config, int[] constitutionalOrbit)
+        SymmetryContext ctx, AutomorphismGroup? group, (List<TetrahedralElement> Tetra, List<DoubleBondElement> Doubles) config, int[] constitutionalOrbit)
     {
         var (amides, nitrogens) = AmideRotation.Find(ctx);
         if (amides.Count == 0 && nitrogens.Count == 0)
@@ -99,7 +100,7 @@ public sealed class NmrEquivalence
             return null;
         }
 
-        var symmetry = ConfigurationSymmetry.Compute(ctx, config.Tetra, [.. config.Doubles, .. amides], nitrogens);
+        var symmetry = ConfigurationSymmetry.Compute(ctx, config.Tetra, [.. config.Doubles, .. amides], nitrogens, group: group);
         return (ConfigurationStats.Of(ctx.Molecule, symmetry, constitutionalOrbit), amides.Count + nitrogens.Count);
     }
 

@@ -10,8 +10,9 @@ internal sealed class PartitionRefiner
     private readonly ColouredGraph graph;
     private readonly ulong[] signature;
     private readonly int[] order;
-
-    private readonly Comparison<int> compare;
+    private readonly int[] cellStart;
+    private readonly int[] fill;
+    private readonly IComparer<int> comparer;
     private int[] current = [];
 
     public PartitionRefiner(ColouredGraph graph)
@@ -19,7 +20,9 @@ internal sealed class PartitionRefiner
         this.graph = graph;
         signature = new ulong[graph.Adjacent.Length];
         order = new int[graph.Count];
-        compare = (a, b) => Compare(current, a, b);
+        cellStart = new int[graph.Count + 1];
+        fill = new int[graph.Count];
+        comparer = Comparer<int>.Create((a, b) => Compare(current, a, b));
     }
 
     /// <summary>Initial cells from vertex invariants plus an optional extra colour per vertex.</summary>
@@ -113,35 +116,73 @@ internal sealed class PartitionRefiner
         return max + 1;
     }
 
+    /// <summary>One refinement round. The new order is (old cell, sorted neighbour signature), as if the whole
+    /// vertex set were sorted by that key; since the old cell is the first key, only the members of each
+    /// non-singleton cell need sorting, and singleton cells keep their place without a signature.</summary>
     private int[] Round(int[] cells, out int count)
     {
-        for (var v = 0; v < graph.Count; v++)
-        {
-            for (var k = graph.Start[v]; k < graph.Start[v + 1]; k++)
-            {
-                signature[k] = ((ulong)(uint)cells[graph.Adjacent[k]] << 3) | (ulong)(uint)graph.EdgeColour[k];
-            }
-
-            Array.Sort(signature, graph.Start[v], graph.Degree(v));
-            order[v] = v;
-        }
-
+        var n = graph.Count;
+        var cellCount = CountCells(cells);
+        GroupByCell(cells, cellCount);
         current = cells;
-        Array.Sort(order, compare);
-        var result = new int[graph.Count];
-        var rank = 0;
-        for (var i = 0; i < order.Length; i++)
+        var result = new int[n];
+        var rank = -1;
+        for (var c = 0; c < cellCount; c++)
         {
-            if (i > 0 && Compare(cells, order[i - 1], order[i]) != 0)
+            var from = cellStart[c];
+            var length = cellStart[c + 1] - from;
+            if (length > 1)
             {
-                rank++;
+                for (var i = from; i < from + length; i++)
+                {
+                    Sign(cells, order[i]);
+                }
+
+                Array.Sort(order, from, length, comparer);
             }
 
-            result[order[i]] = rank;
+            for (var i = from; i < from + length; i++)
+            {
+                rank += i == from || Compare(cells, order[i - 1], order[i]) != 0 ? 1 : 0;
+                result[order[i]] = rank;
+            }
         }
 
-        count = graph.Count == 0 ? 0 : rank + 1;
+        count = rank + 1;
         return result;
+    }
+
+    /// <summary>Counting sort of the vertices by cell into <see cref="order"/>; cell c occupies
+    /// order[cellStart[c]..cellStart[c + 1]).</summary>
+    private void GroupByCell(int[] cells, int cellCount)
+    {
+        Array.Clear(cellStart, 0, cellCount + 1);
+        foreach (var c in cells)
+        {
+            cellStart[c + 1]++;
+        }
+
+        for (var c = 0; c < cellCount; c++)
+        {
+            cellStart[c + 1] += cellStart[c];
+            fill[c] = cellStart[c];
+        }
+
+        for (var v = 0; v < cells.Length; v++)
+        {
+            order[fill[cells[v]]++] = v;
+        }
+    }
+
+    /// <summary>The sorted multiset of (neighbour cell, bond colour) of <paramref name="v"/>, in its CSR slice.</summary>
+    private void Sign(int[] cells, int v)
+    {
+        for (var k = graph.Start[v]; k < graph.Start[v + 1]; k++)
+        {
+            signature[k] = ((ulong)(uint)cells[graph.Adjacent[k]] << 3) | (ulong)(uint)graph.EdgeColour[k];
+        }
+
+        Array.Sort(signature, graph.Start[v], graph.Degree(v));
     }
 
     private int Compare(int[] cells, int a, int b)
