@@ -15,6 +15,14 @@ public sealed record CouplingPartnersOptions : RuleOptions
     public double MinimumToleranceHz { get; init; } = 0.3;
 
     /// <summary>
+    /// Tolerance when either multiplet is a t, q or larger (one J for several protons), Hz. Default 0.6:
+    /// such a pattern is often really a dd/ddd with nearly equal couplings, reported with their average, so it
+    /// differs from each partner's own value by a few tenths (common practice; "apparent triplet").
+    /// </summary>
+    [Range(0.05, 3.0)]
+    public double EqualCouplingToleranceHz { get; init; } = 0.6;
+
+    /// <summary>
     /// J values below this are not required to have a partner, Hz. Default 3.0: long-range (meta, allylic,
     /// W) couplings of 1–3 Hz are often resolved in only one of the two multiplets (common practice).
     /// </summary>

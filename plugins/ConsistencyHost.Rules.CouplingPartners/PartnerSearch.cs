@@ -29,13 +29,20 @@ internal static class PartnerSearch
     private static bool HasPartner(PartnerContext context, int a, IReadOnlyList<int> partners, double hz, CouplingPartnersOptions options)
     {
         var signals = context.Spectrum.Signals;
-        bool Carries(int s) => signals[s].Couplings.Any(c => !c.IsHeteronuclear && JTolerance.Same(c.Hz, hz, options.MinimumToleranceHz));
+        bool Carries(int s)
+        {
+            var minimum = SharesOneJ(signals[a]) || SharesOneJ(signals[s]) ? Math.Max(options.MinimumToleranceHz, options.EqualCouplingToleranceHz) : options.MinimumToleranceHz;
+            return signals[s].Couplings.Any(c => !c.IsHeteronuclear && JTolerance.Same(c.Hz, hz, minimum));
+        }
         if (partners.Any(Carries) || partners.Any(s => Unresolved(signals[s]))) return true;
         if (context.CompoundSignals.Where(s => s != a).Any(s => Carries(s) || Unresolved(signals[s]))) return true;
 
         // A J that no proton partner carries may be to 19F or 31P, or within an AA'XX' multiplet itself.
         return context.MayCoupleToHeteronucleus();
     }
+
+    /// <summary>A pattern with one J for several protons (t, q, quint …): often an average of nearly equal couplings.</summary>
+    private static bool SharesOneJ(Signal signal) => signal.MultiplicityPattern.Components.Any(lines => lines >= 3);
 
     /// <summary>A partner whose J cannot be read: m, broad, apparent, second-order, or given without J.</summary>
     private static bool Unresolved(Signal signal)
