@@ -18,7 +18,7 @@ public sealed record SplittableClass(int ClassIndex, IReadOnlyList<int> FirstHal
 /// </summary>
 /// <remarks>
 /// Handled: a carbonyl or thiocarbonyl carbon bonded to exactly one nitrogen that carries two substituents
-/// other than that carbon, both in the same constitutional class. Not handled: ureas and guanidines (several
+/// other than that carbon, both in the same constitutional class; and the NH2 of a primary amide. Not handled: ureas and guanidines (several
 /// C–N bonds share the barrier), secondary amides (cis/trans rotamers are separate species; authors report
 /// them as minor rotamers), atropisomers.
 /// </remarks>
@@ -31,6 +31,7 @@ public static class AmideRotation
         ArgumentNullException.ThrowIfNull(equivalence);
         var hydrogen = new List<SplittableClass>();
         var carbon = new List<SplittableClass>();
+        hydrogen.AddRange(PrimaryAmideHydrogens(molecule, equivalence));
         foreach (var (nitrogen, first, second) in Amides(molecule, equivalence.Constitutional))
         {
             var firstBranch = Branch(molecule, first, nitrogen);
@@ -41,6 +42,28 @@ public static class AmideRotation
 
         return (hydrogen, carbon);
     }
+
+    /// <summary>
+    /// The NH2 of a primary amide: its two protons are cis and trans to the carbonyl O, and show as two broad
+    /// singlets when rotation is slow (benzamide in DMSO-d6, common practice).
+    /// </summary>
+    private static IEnumerable<SplittableClass> PrimaryAmideHydrogens(Molecule molecule, NmrEquivalence equivalence)
+    {
+        var classes = equivalence.HydrogenClasses;
+        for (var c = 0; c < classes.Length; c++)
+        {
+            var parents = classes[c].ParentAtoms;
+            if (parents.Length == 0 || !parents.All(n => IsPrimaryAmideNitrogen(molecule, n))) continue;
+            var distinct = parents.Distinct().ToList();
+            yield return new SplittableClass(c, distinct, distinct);
+        }
+    }
+
+    private static bool IsPrimaryAmideNitrogen(Molecule molecule, int n) =>
+        molecule.Atoms[n] is { AtomicNumber: 7, Charge: 0, HydrogenCount: 2, IsAromatic: false }
+        && molecule.Degree(n) == 1
+        && IsAcylCarbon(molecule, molecule.Neighbours(n)[0])
+        && CountNitrogens(molecule, molecule.Neighbours(n)[0]) == 1;
 
     private static IEnumerable<(int Nitrogen, int First, int Second)> Amides(Molecule molecule, ConstitutionalClasses constitutional)
     {
