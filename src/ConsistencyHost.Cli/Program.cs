@@ -10,7 +10,7 @@ public static class Program
         "consistencyhost - checks NMR and HRMS data reported for a structure\n\n" +
         "usage:\n  consistencyhost " + CheckCommand.Usage + "\n  consistencyhost " + RulesCommand.Usage +
         "\n  consistencyhost " + ServeCommand.Usage + "\n  consistencyhost " + EnvironmentsCommand.Usage +
-        "\n  consistencyhost " + PeaksCommand.Usage + "\n";
+        "\n  consistencyhost " + PeaksCommand.Usage + "\n  consistencyhost " + ProfilesCommand.Usage + "\n";
 
     public static async Task<int> Main(string[] args)
     {
@@ -33,8 +33,9 @@ public static class Program
         "serve" => await ServeCommand.RunAsync(rest, stdout),
         "environments" => EnvironmentsCommand.Run(rest, stdout),
         "peaks" => PeaksCommand.Run(rest, stdout),
+        "profiles" => ProfilesCommand.Run(rest, stdout),
         "help" or "--help" or "-h" => Print(stdout),
-        _ => throw new UsageException($"unknown command '{command}'; expected check, rules, serve, environments or peaks"),
+        _ => throw new UsageException($"unknown command '{command}'; expected check, rules, serve, environments, peaks or profiles"),
     };
 
     private static int Print(TextWriter stdout)
