@@ -10,7 +10,8 @@ public static class Program
         "consistencyhost - checks NMR and HRMS data reported for a structure\n\n" +
         "usage:\n  consistencyhost " + CheckCommand.Usage + "\n  consistencyhost " + RulesCommand.Usage +
         "\n  consistencyhost " + ServeCommand.Usage + "\n  consistencyhost " + EnvironmentsCommand.Usage +
-        "\n  consistencyhost " + PeaksCommand.Usage + "\n";
+        "\n  consistencyhost " + PeaksCommand.Usage + "\n  consistencyhost " + ProfilesCommand.Usage +
+        "\n  consistencyhost " + BatchCommand.Usage + "\n";
 
     public static async Task<int> Main(string[] args)
     {
@@ -33,8 +34,10 @@ public static class Program
         "serve" => await ServeCommand.RunAsync(rest, stdout),
         "environments" => EnvironmentsCommand.Run(rest, stdout),
         "peaks" => PeaksCommand.Run(rest, stdout),
+        "profiles" => ProfilesCommand.Run(rest, stdout),
+        "batch" => await BatchCommand.RunAsync(rest, stdout),
         "help" or "--help" or "-h" => Print(stdout),
-        _ => throw new UsageException($"unknown command '{command}'; expected check, rules, serve, environments or peaks"),
+        _ => throw new UsageException($"unknown command '{command}'; expected check, rules, serve, environments, peaks, profiles or batch"),
     };
 
     private static int Print(TextWriter stdout)

@@ -7,28 +7,25 @@ using Microsoft.Extensions.Hosting;
 namespace ConsistencyHost.Cli.Commands;
 
 /// <summary>
-/// <c>serve</c>: starts the gRPC host. Prints one line "listening on ADDRESS" to stdout once it accepts calls
-/// (scripts and tests read the port from it when started with --port 0), and stops on Ctrl+C or SIGTERM.
+/// <c>serve</c>: starts the gRPC host. Prints "listening on ADDRESS" (gRPC) and then "json over http on ADDRESS"
+/// to stdout once it accepts calls (scripts and tests read the ports from them when started with port 0), and
+/// stops on Ctrl+C or SIGTERM.
 /// </summary>
 internal static class ServeCommand
 {
     private static readonly Dictionary<string, string> Valued = new(EngineFactory.EngineOptions, StringComparer.Ordinal)
     {
         ["--port"] = "--port",
+        ["--http-port"] = "--http-port",
     };
 
-    public const string Usage = "serve [--port N] [--plugins DIR] [--config FILE]";
+    public const string Usage = "serve [--port N] [--http-port N] [--plugins DIR] [--config FILE]";
 
     public static async Task<int> RunAsync(IReadOnlyList<string> raw, TextWriter stdout)
     {
         var args = ParsedArguments.Parse(raw, Valued, []);
-        int? port = null;
-        if (args.Value("--port") is { } text)
-        {
-            port = int.TryParse(text, NumberStyles.Integer, CultureInfo.InvariantCulture, out var p) && p is >= 0 and <= 65535
-                ? p
-                : throw new UsageException($"--port must be a number from 0 to 65535, not '{text}'");
-        }
+        var port = ReadPort(args, "--port");
+        var httpPort = ReadPort(args, "--http-port");
 
         if (args.Value("--plugins") is { } plugins && !Directory.Exists(plugins))
         {
@@ -38,7 +35,7 @@ internal static class ServeCommand
         Microsoft.AspNetCore.Builder.WebApplication app;
         try
         {
-            app = ServerApp.Build(new ServerLaunch { ConfigFile = args.Value("--config"), PluginsPath = args.Value("--plugins"), Port = port });
+            app = ServerApp.Build(new ServerLaunch { ConfigFile = args.Value("--config"), PluginsPath = args.Value("--plugins"), Port = port, HttpPort = httpPort });
         }
         catch (ProfileConfigurationException error)
         {
@@ -46,13 +43,19 @@ internal static class ServeCommand
         }
 
         await app.StartAsync();
-        foreach (var address in ServerApp.ListeningAddresses(app))
-        {
-            await stdout.WriteLineAsync($"listening on {address}");
-        }
+        // The first line's form is relied on by scripts; the JSON/HTTP address follows on its own line.
+        var endpoints = ServerApp.Endpoints(app);
+        await stdout.WriteLineAsync($"listening on {endpoints.Grpc.ToString().TrimEnd('/')}");
+        await stdout.WriteLineAsync($"json over http on {endpoints.Http.ToString().TrimEnd('/')}");
 
         await stdout.FlushAsync();
         await app.WaitForShutdownAsync();
         return ExitCodes.Ok;
     }
+
+    private static int? ReadPort(ParsedArguments args, string option) => args.Value(option) is not { } text
+        ? null
+        : int.TryParse(text, NumberStyles.Integer, CultureInfo.InvariantCulture, out var p) && p is >= 0 and <= 65535
+            ? p
+            : throw new UsageException($"{option} must be a number from 0 to 65535, not '{text}'");
 }

@@ -6,9 +6,6 @@ using ConsistencyHost.Engine.Profiles;
 using ConsistencyHost.Server.Services;
 using Microsoft.AspNetCore.Builder;
 using Microsoft.AspNetCore.Hosting;
-using Microsoft.AspNetCore.Hosting.Server;
-using Microsoft.AspNetCore.Hosting.Server.Features;
-using Microsoft.AspNetCore.Server.Kestrel.Core;
 using Microsoft.Extensions.Configuration;
 using Microsoft.Extensions.DependencyInjection;
 using Microsoft.Extensions.Diagnostics.HealthChecks;
@@ -16,7 +13,8 @@ using Microsoft.Extensions.Diagnostics.HealthChecks;
 namespace ConsistencyHost.Server.Hosting;
 
 /// <summary>
-/// Builds the gRPC host: generic host + Kestrel (HTTP/2 only), the check service, health and reflection.
+/// Builds the gRPC host: generic host + Kestrel (gRPC over h2c and JSON over HTTP/1.1, each on its own loopback port), the check service
+/// with JSON transcoding, health, reflection and the OpenAPI description.
 /// The engine (plugins and profiles) is built before the host listens, so a bad profile stops start-up.
 /// </summary>
 public static class ServerApp
@@ -36,7 +34,8 @@ public static class ServerApp
 
         var engine = new CheckEngine(EngineConfiguration.Read(builder.Configuration.GetSection("ConsistencyHost"), DefaultPluginsPath));
         var server = ReadServerOptions(builder.Configuration.GetSection("Server"));
-        ConfigureKestrel(builder.WebHost, server);
+        var endpoints = new ServerEndpoints();
+        ConfigureKestrel(builder.WebHost, server, endpoints);
 
         builder.Services.AddSingleton(engine);
         builder.Services.AddSingleton(new ConcurrencyGateOptions(server.MaxConcurrentCalls, server.QueueLimit));
@@ -46,6 +45,7 @@ public static class ServerApp
             QueueLimit = server.QueueLimit,
             QueueProcessingOrder = QueueProcessingOrder.OldestFirst,
         }));
+        builder.Services.AddSingleton(endpoints);
         builder.Services.AddGrpc(options =>
         {
             options.MaxReceiveMessageSize = server.MaxReceiveMessageBytes;
@@ -53,20 +53,25 @@ public static class ServerApp
             options.EnableDetailedErrors = false;
             options.Interceptors.Add<ConcurrencyGate>();
             options.Interceptors.Add<InputErrorInterceptor>();
-        });
+        }).AddJsonTranscoding();
         builder.Services.AddGrpcReflection();
         builder.Services.AddGrpcHealthChecks().AddCheck("plugins", () => PluginHealth(engine));
 
         var app = builder.Build();
+        JsonBodyLimit.Use(app, endpoints, server.MaxReceiveMessageBytes);
         app.MapGrpcService<EntryCheckService>();
         app.MapGrpcHealthChecksService();
         app.MapGrpcReflectionService();
+        OpenApiDocument.Map(app);
         return app;
     }
 
-    /// <summary>The addresses the started host actually listens on (resolves port 0).</summary>
+    /// <summary>The addresses the started host actually listens on (resolves port 0): gRPC first, then JSON/HTTP.</summary>
     public static IReadOnlyList<string> ListeningAddresses(WebApplication app) =>
-        [.. app.Services.GetRequiredService<IServer>().Features.Get<IServerAddressesFeature>()?.Addresses ?? []];
+        [Endpoints(app).Grpc.ToString().TrimEnd('/'), Endpoints(app).Http.ToString().TrimEnd('/')];
+
+    /// <summary>The started host's endpoints.</summary>
+    public static ServerEndpoints Endpoints(WebApplication app) => app.Services.GetRequiredService<ServerEndpoints>();
 
     private static void AddOverrides(ConfigurationManager configuration, ServerLaunch launch)
     {
@@ -78,6 +83,7 @@ public static class ServerApp
         var overrides = new Dictionary<string, string?>();
         if (launch.PluginsPath is not null) overrides["ConsistencyHost:PluginsPath"] = Path.GetFullPath(launch.PluginsPath);
         if (launch.Port is { } port) overrides["Server:Port"] = port.ToString(CultureInfo.InvariantCulture);
+        if (launch.HttpPort is { } httpPort) overrides["Server:HttpPort"] = httpPort.ToString(CultureInfo.InvariantCulture);
         configuration.AddInMemoryCollection(overrides);
     }
 
@@ -87,6 +93,7 @@ public static class ServerApp
         return new ServerOptions
         {
             Port = section.GetValue("Port", defaults.Port),
+            HttpPort = section.GetValue("HttpPort", defaults.HttpPort),
             BindAddress = section.GetValue("BindAddress", defaults.BindAddress) ?? defaults.BindAddress,
             MaxReceiveMessageBytes = section.GetValue("MaxReceiveMessageBytes", defaults.MaxReceiveMessageBytes),
             MaxSendMessageBytes = section.GetValue("MaxSendMessageBytes", defaults.MaxSendMessageBytes),
@@ -95,7 +102,7 @@ public static class ServerApp
         };
     }
 
-    private static void ConfigureKestrel(IWebHostBuilder webHost, ServerOptions server)
+    private static void ConfigureKestrel(IWebHostBuilder webHost, ServerOptions server, ServerEndpoints endpoints)
     {
         if (!IPAddress.TryParse(server.BindAddress, out var address))
         {
@@ -111,7 +118,7 @@ public static class ServerApp
 
         webHost.ConfigureKestrel(kestrel =>
         {
-            kestrel.Listen(address, server.Port, listen => listen.Protocols = HttpProtocols.Http2);
+            endpoints.Configure(kestrel, address, server);
         });
     }
 

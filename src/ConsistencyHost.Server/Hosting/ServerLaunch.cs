@@ -14,4 +14,7 @@ public sealed record ServerLaunch
 
     /// <summary>Port override; null keeps configuration.</summary>
     public int? Port { get; init; }
+
+    /// <summary>JSON/HTTP port override; null keeps configuration.</summary>
+    public int? HttpPort { get; init; }
 }

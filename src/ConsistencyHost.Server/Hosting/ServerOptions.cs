@@ -8,6 +8,12 @@ public sealed record ServerOptions
     /// <summary>The port the host listens on; 0 picks a free one (tests).</summary>
     public int Port { get; init; } = 5151;
 
+    /// <summary>
+    /// The port for JSON over HTTP/1.1 (the transcoded API and /openapi.json); 0 picks a free one. A second
+    /// port because cleartext HTTP/1.1 and h2c cannot share one endpoint without TLS (no ALPN).
+    /// </summary>
+    public int HttpPort { get; init; } = 5152;
+
     /// <summary>The address to bind; loopback by default so nothing outside the machine can call in.</summary>
     public string BindAddress { get; init; } = IPAddress.Loopback.ToString();
 

@@ -14,15 +14,19 @@ internal sealed class RunningHost : IAsyncDisposable
     private readonly WebApplication _app;
     private readonly PluginFolder _plugins;
 
-    private RunningHost(WebApplication app, PluginFolder plugins, Uri address)
+    private RunningHost(WebApplication app, PluginFolder plugins, Uri address, Uri httpAddress)
     {
         _app = app;
         _plugins = plugins;
         Address = address;
+        HttpAddress = httpAddress;
         Channel = GrpcChannel.ForAddress(address);
     }
 
     public Uri Address { get; }
+
+    /// <summary>The JSON over HTTP/1.1 endpoint.</summary>
+    public Uri HttpAddress { get; }
 
     public GrpcChannel Channel { get; }
 
@@ -31,10 +35,10 @@ internal sealed class RunningHost : IAsyncDisposable
     public static async Task<RunningHost> StartAsync(string[] plugins, string? configFile = null)
     {
         var folder = PluginFolder.With(plugins);
-        var app = ServerApp.Build(new ServerLaunch { PluginsPath = folder.Path, Port = 0, ConfigFile = configFile });
+        var app = ServerApp.Build(new ServerLaunch { PluginsPath = folder.Path, Port = 0, HttpPort = 0, ConfigFile = configFile });
         await app.StartAsync().WaitAsync(TimeSpan.FromSeconds(60));
-        var address = new Uri(ServerApp.ListeningAddresses(app).Single());
-        return new RunningHost(app, folder, address);
+        var endpoints = ServerApp.Endpoints(app);
+        return new RunningHost(app, folder, endpoints.Grpc, endpoints.Http);
     }
 
     public async ValueTask DisposeAsync()

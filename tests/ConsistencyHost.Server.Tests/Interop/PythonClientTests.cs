@@ -31,7 +31,7 @@ public sealed class PythonClientTests
         Assert.Equal("INVALID_ARGUMENT", root.GetProperty("badRequestStatus").GetString());
     }
 
-    private static Task<(int ExitCode, string Stdout, string Stderr)> RunAsync(string file, params string[] args)
+    internal static Task<(int ExitCode, string Stdout, string Stderr)> RunAsync(string file, params string[] args)
     {
         Assert.True(File.Exists(file), $"{file} is missing: install Debian's python3-grpcio and python3-grpc-tools (see .ci/run)");
         return ChildProcess.RunAsync(file, args);

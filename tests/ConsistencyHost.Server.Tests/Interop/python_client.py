@@ -17,7 +17,10 @@ from grpc_tools import protoc
 
 
 def generate_stubs(proto_dir: str, out_dir: str) -> None:
+    # google/api/{http,annotations}.proto are vendored in proto/ for the HTTP rules; their python modules are
+    # generated here too (Debian ships no googleapis-common-protos), and `google` is a namespace package.
     files = [f"consistencyhost/v1/{name}.proto" for name in ("entry", "report", "check")]
+    files += ["google/api/http.proto", "google/api/annotations.proto"]
     well_known = os.path.join(os.path.dirname(grpc_tools.__file__), "_proto")
     status = protoc.main(["grpc_tools.protoc", f"-I{proto_dir}", f"-I{well_known}", f"--python_out={out_dir}", f"--grpc_python_out={out_dir}", *files])
     if status != 0:

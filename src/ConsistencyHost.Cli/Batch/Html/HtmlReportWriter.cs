@@ -1,0 +1,72 @@
+using System.Text;
+using ConsistencyHost.Contract.V1;
+using static ConsistencyHost.Cli.Batch.Html.SvgText;
+
+namespace ConsistencyHost.Cli.Batch.Html;
+
+/// <summary>
+/// Writes report.html without holding the reports: each entry's section goes to a scratch file as it arrives,
+/// and only a small summary per entry (its rank and where its section lies) stays in memory. At the end the
+/// page is assembled: totals and the chart first, then the sections copied worst first.
+/// </summary>
+internal sealed class HtmlReportWriter : IDisposable
+{
+    private readonly string _target;
+    private readonly string _scratchPath;
+    private readonly FileStream _scratch;
+    private readonly List<EntrySummary> _entries = [];
+    private readonly Dictionary<(string Rule, Severity Severity), int> _totals = [];
+
+    public HtmlReportWriter(string target)
+    {
+        _target = target;
+        _scratchPath = target + ".sections.tmp";
+        _scratch = new FileStream(_scratchPath, FileMode.Create, FileAccess.ReadWrite, FileShare.None, 1 << 16, FileOptions.DeleteOnClose);
+    }
+
+    public void Add(BatchItem item, CheckEntryResponse response)
+    {
+        var bytes = Encoding.UTF8.GetBytes(EntryFragment.Render(item, response));
+        _entries.Add(EntrySummary.Of(response, _entries.Count, _scratch.Position, bytes.Length));
+        _scratch.Write(bytes);
+        foreach (var finding in response.Findings)
+        {
+            _totals[(finding.RuleId, finding.Severity)] = _totals.GetValueOrDefault((finding.RuleId, finding.Severity)) + 1;
+        }
+    }
+
+    public void Complete(string title)
+    {
+        _scratch.Flush();
+        using var output = new FileStream(_target, FileMode.Create, FileAccess.Write);
+        using (var head = new StreamWriter(output, new UTF8Encoding(false), leaveOpen: true))
+        {
+            head.Write($"<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\"><title>{E(title)}</title><style>{ReportStyle.Css}</style></head><body>\n");
+            head.Write($"<h1>{E(title)}</h1>{Summary()}<h2>Findings by rule and severity</h2>{SeverityChartSvg.Draw(_totals)}<h2>Entries, worst first</h2>\n");
+        }
+
+        var buffer = new byte[1 << 16];
+        foreach (var entry in _entries.Order())
+        {
+            _scratch.Position = entry.Offset;
+            for (var left = entry.Length; left > 0;)
+            {
+                var read = _scratch.Read(buffer, 0, Math.Min(buffer.Length, left));
+                if (read == 0) throw new IOException($"scratch file ended early at entry {entry.Sequence}");
+                output.Write(buffer, 0, read);
+                left -= read;
+            }
+        }
+
+        output.Write(Encoding.UTF8.GetBytes("<footer>Findings are screening aids for a qualified chemist, not a release decision.</footer>\n</body></html>\n"));
+    }
+
+    public void Dispose() => _scratch.Dispose();
+
+    private string Summary()
+    {
+        int Count(int rank) => _entries.Count(e => e.Rank == rank);
+        return $"<div class=\"summary\"><div><b>{_entries.Count}</b>entries</div><div><b>{Count(EntrySummary.ErrorRank) + Count(EntrySummary.InputRank)}</b>with an error or unreadable</div>"
+            + $"<div><b>{Count(2)}</b>worst is a warning</div><div><b>{Count(1)}</b>worst is info</div><div><b>{Count(0)}</b>no findings</div></div>";
+    }
+}
