@@ -25,7 +25,7 @@ public static class ProtonInterpreter
         var (counts, fit) = ProtonCounts(spectrum.Signals, minor, fast);
         var best = Choose(spectrum.Signals, counts, minor, candidates, fast);
         var classes = fast;
-        if (splits.Count > 0)
+        if (splits.Count > 0 && !IsPerfect(best))
         {
             // Slow amide rotation is a second reading of the structure; it must explain the data strictly better.
             var slow = ClassInputs.Split(fast, splits.Select(s => s.ClassIndex));
@@ -116,10 +116,18 @@ public static class ProtonInterpreter
             {
                 best = reading;
             }
+
+            // Costs are never negative, so nothing can beat a zero-cost reading that removes nothing; the other
+            // readings' searches are skipped (each can run to the node budget, ~0.1 s, when it has no zero-cost
+            // assignment: measured by bench/, see docs/benchmarks.md).
+            if (IsPerfect(best)) break;
         }
 
         return best!;
     }
+
+    /// <summary>Zero cost with every signal kept: the best any reading can be (costs are non-negative).</summary>
+    private static bool IsPerfect(Reading reading) => reading.Cost <= 0 && reading.Removed.Count == 0;
 
     private static Reading Evaluate(IReadOnlyList<Signal> signals, int?[] counts, bool[] minor, Dictionary<int, SignalRole> removed, IReadOnlyList<ClassInput> classes)
     {

@@ -1,0 +1,204 @@
+#!/usr/bin/python3
+"""Turns one benchmark run (BenchmarkDotNet JSON exports + RDKit timings) into bench/results/summary.json and
+docs/benchmarks.md. Every ratio is taken between two figures of the same run, so machine load cancels."""
+import argparse
+import datetime
+import glob
+import json
+import os
+import platform
+import statistics
+import subprocess
+
+ROOT = os.path.dirname(os.path.dirname(os.path.abspath(__file__)))
+RESULTS = os.path.join(ROOT, "bench", "results")
+
+
+def load_dotnet():
+    """Median ns and allocated bytes per operation, keyed 'Type.Method' or 'Type.Method(Params)'."""
+    figures = {}
+    for path in glob.glob(os.path.join(RESULTS, "dotnet", "results", "*-report-full.json")):
+        with open(path) as handle:
+            for b in json.load(handle)["Benchmarks"]:
+                key = f"{b['Type']}.{b['Method']}" + (f"({b['Parameters']})" if b["Parameters"] else "")
+                figures[key] = {"median_ns": b["Statistics"]["Median"],
+                                "bytes": b["Memory"]["BytesAllocatedPerOperation"]}
+    return figures
+
+
+def load_rdkit():
+    runs, parts = [], []
+    for path in sorted(glob.glob(os.path.join(RESULTS, "rdkit-*.json"))):
+        with open(path) as handle:
+            part = json.load(handle)
+        parts.append(part)
+        runs.extend(part["runs"])
+    if not parts:
+        raise SystemExit("no RDKit timings in bench/results (run bench/run.sh)")
+    step = {k: statistics.median(p[k] for p in parts) for k in ("parse_s", "addhs_s", "rank_s")}
+    return {**step, "total_s": statistics.median(runs), "repeats": len(runs),
+            "molecules": parts[0]["molecules"], "version": parts[0]["rdkit"]}
+
+
+def need(figures, key):
+    if key not in figures:
+        raise SystemExit(f"benchmark {key} missing from bench/results (did it fail?)")
+    return figures[key]
+
+
+def machine():
+    def run(cmd):
+        try:
+            return subprocess.run(cmd, capture_output=True, text=True, check=True).stdout.strip()
+        except (OSError, subprocess.CalledProcessError):
+            return "unknown"
+    model = next((line.split(":", 1)[1].strip() for line in open("/proc/cpuinfo") if line.startswith("model name")), "unknown")
+    return {"nproc": run(["nproc"]), "cpu": model, "dotnet": run(["dotnet", "--version"]),
+            "python": platform.python_version(), "load": open("/proc/loadavg").read().split()[0],
+            "date": datetime.datetime.now(datetime.timezone.utc).strftime("%Y-%m-%d %H:%M UTC")}
+
+
+def summarise(mode):
+    f, rd = load_dotnet(), load_rdkit()
+    s = lambda key: need(f, key)["median_ns"] / 1e9
+    us = lambda key: need(f, key)["median_ns"] / 1e3
+    nci = 4999  # lines of first_5K.smi; all read leniently by the benchmark
+    per = {"parse_s": s("PerceptionBenchmarks.Parse"), "constitutional_s": s("PerceptionBenchmarks.Constitutional"),
+           "stereo_s": s("PerceptionBenchmarks.StereoAware")}
+    rules = {k.split("RuleId=")[1].rstrip(")"): v["median_ns"] / 1e3 for k, v in f.items() if k.startswith("RuleBenchmarks.Rule(")}
+    entry = {"check_us": us("EntryBenchmarks.Check"), "inline_us": us("EntryBenchmarks.CheckInline"), "intake_us": us("EntryBenchmarks.Intake"),
+             "perception_us": us("EntryBenchmarks.Perception"), "interpretation_us": us("EntryBenchmarks.Interpretation"),
+             "rules_us": rules,
+             "interpretation_by_entry_us": {k.split("EntryId=")[1].rstrip(")"): v["median_ns"] / 1e3
+                                            for k, v in f.items() if k.startswith("InterpretationByEntryBenchmarks.Interpret(")},
+             "check_bytes": need(f, "EntryBenchmarks.Check")["bytes"]}
+    text = {"read_us": us("ReportedTextBenchmarks.Read"), "trivial_us": us("ReportedTextBenchmarks.TrivialScan"),
+            "read_bytes": need(f, "ReportedTextBenchmarks.Read")["bytes"]}
+    ours_full = per["parse_s"] + per["stereo_s"]
+    guard = {  # higher is better: how many times faster than the reference measured in the same run
+        "perception_speed_vs_rdkit": rd["total_s"] / ours_full,
+        "text_speed_vs_trivial_scan": text["trivial_us"] / text["read_us"],
+        "inline_check_speed_vs_intake": entry["intake_us"] / entry["inline_us"],
+    }
+    return {"mode": mode, "machine": machine(), "nci_molecules": nci, "perception": per, "rdkit": rd,
+            "text": text, "entry": entry, "guard": guard}
+
+
+def markdown(r):
+    m, p, rd, t, e, g = r["machine"], r["perception"], r["rdkit"], r["text"], r["entry"], r["guard"]
+    n = r["nci_molecules"]
+    ours_full = p["parse_s"] + p["stereo_s"]
+    rd_ranked = rd["addhs_s"] + rd["rank_s"]
+    rows = [("Intake (SMILES + reported text read)", e["intake_us"]), ("Perception (formula + stereo-aware classes)", e["perception_us"]),
+            ("1H interpretation + assignment", e["interpretation_us"])]
+    rows += [(f"rule `{k}`", v) for k, v in sorted(e["rules_us"].items())]
+    staged = sum(v for _, v in rows)
+    lines = [
+        "# Benchmarks",
+        "",
+        "Generated by `bench/run.sh` — do not edit by hand; rerun it. Medians of BenchmarkDotNet iterations (in-process,",
+        "Release) and of RDKit repetitions, all taken in the same run; the ratios are what to compare between machines.",
+        "",
+        f"Run: `{r['mode']}` mode, {m['date']}; {m['nproc']} cores ({m['cpu']}), 1-min load average {m['load']} at the end",
+        f"(the machine is shared: absolute times are inflated by other work, ratios much less); .NET SDK {m['dotnet']};",
+        f"RDKit {rd['version']} on Python {m['python']}.",
+        "",
+        "## Perception over NCI first_5K.smi",
+        "",
+        f"| step | median per set | molecules/s |",
+        "| --- | ---: | ---: |",
+        f"| ours: parse (SmilesReader.Read, lenient, {n} lines) | {p['parse_s']:.3f} s | {n / p['parse_s']:,.0f} |",
+        f"| ours: constitutional classes (ConstitutionalClasses.Of) | {p['constitutional_s']:.3f} s | {n / p['constitutional_s']:,.0f} |",
+        f"| ours: stereo-aware classes (NmrEquivalence.Of) | {p['stereo_s']:.3f} s | {n / p['stereo_s']:,.0f} |",
+        f"| RDKit: parse (MolFromSmiles, {rd['molecules']} read) | {rd['parse_s']:.3f} s | {rd['molecules'] / rd['parse_s']:,.0f} |",
+        f"| RDKit: AddHs + CanonicalRankAtoms(breakTies=False) | {rd_ranked:.3f} s | {rd['molecules'] / rd_ranked:,.0f} |",
+        f"| RDKit: parse + AddHs + rank ({rd['repeats']} repetitions) | {rd['total_s']:.3f} s | {rd['molecules'] / rd['total_s']:,.0f} |",
+        "",
+        f"**Ours / RDKit, full stereo-aware perception (parse + NmrEquivalence) against parse + AddHs + constitutional"
+        f" ranking: {ours_full / rd['total_s']:.2f}** (target ≤ 1). Perception step alone, NmrEquivalence against"
+        f" AddHs + ranking: {p['stereo_s'] / rd_ranked:.2f}; constitutional classes against AddHs + ranking:"
+        f" {p['constitutional_s'] / rd_ranked:.2f}.",
+        "",
+        "## Reported text",
+        "",
+        "| benchmark | median | lines/s | allocated |",
+        "| --- | ---: | ---: | ---: |",
+        f"| ReportedTextReader.Read, typical 25-signal 1H line | {t['read_us']:.1f} µs | {1e6 / t['read_us']:,.0f} | {t['read_bytes']:,} B |",
+        f"| trivial scan of the same line (every number parsed once) | {t['trivial_us']:.1f} µs | {1e6 / t['trivial_us']:,.0f} | 0 B |",
+        "",
+        f"Reader / trivial scan: {t['read_us'] / t['trivial_us']:.1f}. Target: well under 20 µs per line.",
+        "",
+        "## Entries through the engine",
+        "",
+        "Four entries of real compounds (strychnine, Boc-Phe-Leu-OMe, ezetimibe, Fmoc-Val-OH: 25–30 heavy atoms,",
+        "12–22 1H signals, a 13C list and an HRMS line each; `bench/ConsistencyHost.Benchmarks/Entries/EntryMix.cs`).",
+        "`CheckEngine.Check` end to end, then each stage timed directly (rules on warm perception).",
+        "",
+        "| stage | median µs per entry | share of the staged sum |",
+        "| --- | ---: | ---: |",
+    ]
+    lines += [f"| {name} | {v:,.1f} | {100 * v / staged:.1f} % |" for name, v in rows]
+    lines += [
+        f"| **sum of stages** | {staged:,.1f} | 100 % |",
+        f"| the same work on one thread (intake, then each rule called in turn) | {e['inline_us']:,.1f} | {100 * e['inline_us'] / staged:.0f} % of the sum |",
+        f"| **CheckEngine.Check end to end** | **{e['check_us']:,.1f}** | {100 * e['check_us'] / staged:.0f} % of the sum |",
+        "",
+        f"Entries per second: {1e6 / e['check_us']:,.1f}. Allocated per checked entry: {e['check_bytes']:,} B. Target: ≤ 200 µs per entry.",
+        "1H interpretation by entry (median µs): " + ", ".join(f"{k} {v:,.1f}" for k, v in sorted(e["interpretation_by_entry_us"].items())) + ".",
+        "",
+        f"Check minus the one-thread run is the runner's cost, {e['check_us'] - e['inline_us']:,.1f} µs per entry in this run: a thread-pool task,",
+        "a linked deadline and a stopwatch per rule, the waits, stamping and sorting; on a loaded 2-core machine most of it",
+        "is waiting for a pool thread.",
+        "",
+        "## Changes measured with this page",
+        "",
+        "- 2 Dec 2026, `ProtonInterpreter` stops evaluating alternative readings (residual-solvent and impurity candidates",
+        "  removed) once the full reading costs zero. Before, every alternative ran its own assignment search, and one",
+        "  without a zero-cost answer runs to the 250,000-node budget (strychnine with any one signal removed: 250,000",
+        "  nodes, ~90 ms, not exhaustive). Short mode, same machine, runs 5 minutes apart: 1H interpretation 41,119 → 128 µs per",
+        "  entry, Check 136,124 → 3,265 µs, allocated per checked entry 22.2 MB → 0.45 MB. Entries whose full reading does",
+        "  not cost zero (a real residual line, a miscounted signal) still pay one budget-sized search per alternative.",
+        "",
+        "## Regression guard",
+        "",
+        "`bench/baseline.json` holds three speed ratios (higher is better), each between two figures of one run:",
+        "",
+        "| ratio | this run |",
+        "| --- | ---: |",
+        f"| `perception_speed_vs_rdkit`: RDKit parse + AddHs + rank time / our parse + NmrEquivalence time | {g['perception_speed_vs_rdkit']:.3f} |",
+        f"| `text_speed_vs_trivial_scan`: trivial scan time / ReportedTextReader.Read time | {g['text_speed_vs_trivial_scan']:.3f} |",
+        f"| `inline_check_speed_vs_intake`: intake time / one-thread check time | {g['inline_check_speed_vs_intake']:.4f} |",
+        "",
+        "```sh",
+        "bench/run.sh --short            # a few seconds per benchmark; regenerates this page and bench/results/summary.json",
+        "bench/run.sh --full             # more iterations",
+        "bench/check-regression.sh       # fails (exit 1) when a ratio of the last run falls more than the margin below the baseline",
+        "```",
+        "",
+        "The guard uses the one-thread check rather than `CheckEngine.Check`, whose time on a loaded 2-core machine is",
+        "mostly waiting for pool threads. Even ratios move with load: ours/RDKit perception was 1.02, 2.00 and 1.64 in three",
+        "short runs and 2.06 in a full run within 35 minutes (load average 9–20), so the committed baseline takes the slowest",
+        "of the runs at hand.",
+        "",
+        "The margin is stored in `bench/baseline.json` (30 %). The guard is not part of `.ci/run`. After an intended speed",
+        "change, rerun `bench/run.sh` and copy the new ratios from `bench/results/summary.json` into the baseline in the same commit.",
+        "",
+    ]
+    return "\n".join(lines)
+
+
+def main():
+    parser = argparse.ArgumentParser(description=__doc__)
+    parser.add_argument("--mode", default="short")
+    parser.add_argument("--out", default=os.path.join(ROOT, "docs", "benchmarks.md"))
+    args = parser.parse_args()
+    summary = summarise(args.mode)
+    with open(os.path.join(RESULTS, "summary.json"), "w") as handle:
+        json.dump(summary, handle, indent=2)
+    with open(args.out, "w") as handle:
+        handle.write(markdown(summary))
+    print(json.dumps(summary["guard"]))
+
+
+if __name__ == "__main__":
+    main()
