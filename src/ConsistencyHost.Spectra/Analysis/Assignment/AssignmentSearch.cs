@@ -1,6 +1,6 @@
 namespace ConsistencyHost.Spectra.Analysis.Assignment;
 
-/// <summary>The branch-and-bound state of one <see cref="AssignmentSolver.Solve"/> call.</summary>
+/// <summary>The branch-and-bound state of one <see cref="AssignmentSolver"/> call.</summary>
 internal sealed class AssignmentSearch
 {
     private readonly IReadOnlyList<ClassInput> _classes;
@@ -12,17 +12,31 @@ internal sealed class AssignmentSearch
     private readonly int[] _members;        // per signal: number of classes assigned
     private readonly double[] _pattern;     // per signal: worst pattern cost among its classes
     private readonly int[] _remainingAfter; // protons of classes at order positions >= i
+    private readonly double[,] _patternCost; // per class and signal, computed once
+    private readonly int[][] _candidates;    // per order position: reusable candidate buffer (signals + Missing)
     private int[]? _bestChoice;
-    private double _bestCost = double.PositiveInfinity;
+    private double _bestCost;
     private long _nodes;
 
     private int Missing => _signals.Count;
 
-    public AssignmentSearch(IReadOnlyList<ClassInput> classes, IReadOnlyList<SignalInput> signals, AssignmentOptions options)
+    /// <param name="classes">The classes.</param>
+    /// <param name="signals">The signals.</param>
+    /// <param name="options">Weights and budget.</param>
+    /// <param name="upperBound">Only assignments cheaper than this are of interest (a better one is known elsewhere).</param>
+    public AssignmentSearch(IReadOnlyList<ClassInput> classes, IReadOnlyList<SignalInput> signals, AssignmentOptions options, double upperBound)
     {
         _classes = classes;
         _signals = signals;
         _options = options;
+        _bestCost = upperBound;
+        _patternCost = new double[classes.Count, signals.Count];
+        for (var c = 0; c < classes.Count; c++)
+        {
+            for (var s = 0; s < signals.Count; s++) _patternCost[c, s] = PatternCost.Of(classes[c], signals[s], options);
+        }
+
+        _candidates = [.. Enumerable.Range(0, classes.Count).Select(_ => new int[signals.Count + 1])];
         // Largest first; interchangeable classes next to each other so that their ordering constraint applies.
         _order = [.. Enumerable.Range(0, classes.Count)
             .OrderByDescending(i => classes[i].Size).ThenBy(i => classes[i].IsExchangeable)
@@ -59,8 +73,11 @@ internal sealed class AssignmentSearch
         }
 
         var current = _order[position];
-        foreach (var signal in Candidates(position))
+        var buffer = _candidates[position];
+        var count = Candidates(position, buffer);
+        for (var k = 0; k < count; k++)
         {
+            var signal = buffer[k];
             _choice[current] = signal;
             if (signal == Missing)
             {
@@ -75,24 +92,38 @@ internal sealed class AssignmentSearch
         }
     }
 
-    /// <summary>Signals worth trying for the class at <paramref name="position"/>, most promising first.</summary>
-    private IEnumerable<int> Candidates(int position)
+    /// <summary>
+    /// Fills <paramref name="buffer"/> with the signals worth trying for the class at <paramref name="position"/>,
+    /// most promising first: signals it fits in (cheapest pattern first), then Missing, then signals it would
+    /// overflow. Returns how many were written. No allocation: the search visits up to the node budget.
+    /// </summary>
+    private int Candidates(int position, int[] buffer)
     {
         var current = _order[position];
         var size = _classes[current].Size;
         var floor = position > 0 && SameKind(_order[position - 1], current) ? _choice[_order[position - 1]] : 0;
-        var fitting = new List<int>();
-        var overflowing = new List<int>();
+        var fitting = 0;
         for (var s = floor; s < _signals.Count; s++)
         {
-            if (_members[s] == 0 && HasIdenticalEarlierEmpty(s, floor)) continue;
-            (_filled[s] + size <= _signals[s].ProtonCount ? fitting : overflowing).Add(s);
+            if (_filled[s] + size > _signals[s].ProtonCount || (_members[s] == 0 && HasIdenticalEarlierEmpty(s, floor))) continue;
+            var at = fitting++;
+            while (at > 0 && _patternCost[current, buffer[at - 1]] > _patternCost[current, s])
+            {
+                buffer[at] = buffer[at - 1];
+                at--;
+            }
+
+            buffer[at] = s;
         }
 
-        fitting.Sort((a, b) => PatternCost.Of(_classes[current], _signals[a], _options).CompareTo(PatternCost.Of(_classes[current], _signals[b], _options)));
-        foreach (var s in fitting) yield return s;
-        yield return Missing;
-        foreach (var s in overflowing) yield return s;
+        var count = fitting;
+        buffer[count++] = Missing;
+        for (var s = floor; s < _signals.Count; s++)
+        {
+            if (_filled[s] + size > _signals[s].ProtonCount && !(_members[s] == 0 && HasIdenticalEarlierEmpty(s, floor))) buffer[count++] = s;
+        }
+
+        return count;
     }
 
     private bool HasIdenticalEarlierEmpty(int signal, int floor)
@@ -115,7 +146,7 @@ internal sealed class AssignmentSearch
         var before = Overflow(signal) + _pattern[signal];
         _filled[signal] += _classes[current].Size;
         _members[signal]++;
-        _pattern[signal] = Math.Max(_pattern[signal], PatternCost.Of(_classes[current], _signals[signal], _options));
+        _pattern[signal] = Math.Max(_pattern[signal], _patternCost[current, signal]);
         return Overflow(signal) + _pattern[signal] - before;
     }
 

@@ -10,11 +10,19 @@ namespace ConsistencyHost.Spectra.Analysis.Assignment;
 public static class AssignmentSolver
 {
     /// <summary>Solves one instance.</summary>
-    public static AssignmentResult Solve(IReadOnlyList<ClassInput> classes, IReadOnlyList<SignalInput> signals, AssignmentOptions? options = null)
+    public static AssignmentResult Solve(IReadOnlyList<ClassInput> classes, IReadOnlyList<SignalInput> signals, AssignmentOptions? options = null) =>
+        Solve(classes, signals, options, double.PositiveInfinity);
+
+    /// <summary>
+    /// Solves one instance looking only for assignments cheaper than <paramref name="upperBound"/> (a reading
+    /// that cannot beat one already found is pruned early). When none is cheaper, the result has an infinite
+    /// cost and is not consistent.
+    /// </summary>
+    public static AssignmentResult Solve(IReadOnlyList<ClassInput> classes, IReadOnlyList<SignalInput> signals, AssignmentOptions? options, double upperBound)
     {
         ArgumentNullException.ThrowIfNull(classes);
         ArgumentNullException.ThrowIfNull(signals);
-        var search = new AssignmentSearch(classes, signals, options ?? AssignmentOptions.Default);
+        var search = new AssignmentSearch(classes, signals, options ?? AssignmentOptions.Default, upperBound);
         return search.Run();
     }
 }

@@ -29,7 +29,7 @@ public static class ProtonInterpreter
         {
             // Slow amide rotation is a second reading of the structure; it must explain the data strictly better.
             var slow = ClassInputs.Split(fast, splits.Select(s => s.ClassIndex));
-            var slowBest = Choose(spectrum.Signals, counts, minor, candidates, slow);
+            var slowBest = Choose(spectrum.Signals, counts, minor, candidates, slow, best.Cost);
             if (slowBest.Cost < best.Cost - 1e-9)
             {
                 (best, classes) = (slowBest, slow);
@@ -99,19 +99,22 @@ public static class ProtonInterpreter
 
     private sealed record Reading(List<int> Kept, Dictionary<int, SignalRole> Removed, AssignmentResult? Assignment, double Cost);
 
-    private static Reading Choose(IReadOnlyList<Signal> signals, int?[] counts, bool[] minor, Dictionary<int, SignalRole> candidates, IReadOnlyList<ClassInput> classes)
+    private static Reading Choose(IReadOnlyList<Signal> signals, int?[] counts, bool[] minor, Dictionary<int, SignalRole> candidates, IReadOnlyList<ClassInput> classes,
+        double bound = double.PositiveInfinity)
     {
+        // Fewest removed first, so that a later reading must be strictly cheaper to win and its search can be
+        // bounded by the best cost so far.
         var options = new List<Dictionary<int, SignalRole>> { new() };
-        if (candidates.Count > 0) options.Add(candidates);
         if (candidates.Count is > 1 and <= 8)
         {
             options.AddRange(candidates.Select(c => new Dictionary<int, SignalRole> { [c.Key] = c.Value }));
         }
 
+        if (candidates.Count > 0) options.Add(candidates);
         Reading? best = null;
         foreach (var removed in options)
         {
-            var reading = Evaluate(signals, counts, minor, removed, classes);
+            var reading = Evaluate(signals, counts, minor, removed, classes, Math.Min(bound, best?.Cost ?? double.PositiveInfinity));
             if (best is null || reading.Cost < best.Cost - 1e-9 || (Math.Abs(reading.Cost - best.Cost) <= 1e-9 && reading.Removed.Count < best.Removed.Count))
             {
                 best = reading;
@@ -129,7 +132,7 @@ public static class ProtonInterpreter
     /// <summary>Zero cost with every signal kept: the best any reading can be (costs are non-negative).</summary>
     private static bool IsPerfect(Reading reading) => reading.Cost <= 0 && reading.Removed.Count == 0;
 
-    private static Reading Evaluate(IReadOnlyList<Signal> signals, int?[] counts, bool[] minor, Dictionary<int, SignalRole> removed, IReadOnlyList<ClassInput> classes)
+    private static Reading Evaluate(IReadOnlyList<Signal> signals, int?[] counts, bool[] minor, Dictionary<int, SignalRole> removed, IReadOnlyList<ClassInput> classes, double bound)
     {
         var kept = Enumerable.Range(0, signals.Count).Where(i => !minor[i] && !removed.ContainsKey(i)).ToList();
         if (kept.Any(i => counts[i] is null))
@@ -141,7 +144,7 @@ public static class ProtonInterpreter
         }
 
         var inputs = kept.Select(i => new SignalInput(counts[i]!.Value, PatternReading.ImpliedCoupledProtons(signals[i].MultiplicityPattern))).ToList();
-        var assignment = AssignmentSolver.Solve(classes, inputs);
+        var assignment = AssignmentSolver.Solve(classes, inputs, null, bound);
         return new Reading(kept, removed, assignment, assignment.Cost);
     }
 }
