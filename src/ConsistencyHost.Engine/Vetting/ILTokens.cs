@@ -1,3 +1,4 @@
+using System.Buffers.Binary;
 using System.Reflection;
 using System.Reflection.Emit;
 using System.Reflection.Metadata;
@@ -19,52 +20,50 @@ internal static class ILTokens
         .ToDictionary(code => code.Value, code => code.OperandType);
 
     /// <summary>Every token operand of the body's instructions, in order.</summary>
-    public static IEnumerable<EntityHandle> Of(MethodBodyBlock body)
+    public static IEnumerable<EntityHandle> Of(MethodBodyBlock body) => Of(body.GetILBytes() ?? []);
+
+    /// <summary>Every token operand of an IL byte stream, in order.</summary>
+    /// <exception cref="BadImageFormatException">An opcode the runtime does not know, or a truncated operand.</exception>
+    internal static IReadOnlyList<EntityHandle> Of(byte[] il)
     {
-        var il = body.GetILReader();
         var tokens = new List<EntityHandle>();
-        while (il.RemainingBytes > 0)
+        var at = 0;
+        while (at < il.Length)
         {
-            var first = il.ReadByte();
-            var value = first == 0xFE ? (short)(0xFE00 | il.ReadByte()) : (short)first;
+            var start = at;
+            int first = il[at++];
+            var value = first == 0xFE && at < il.Length ? (short)(0xFE00 | il[at++]) : (short)first;
             if (!Operands.TryGetValue(value, out var operand))
             {
-                throw new BadImageFormatException($"unknown IL opcode 0x{(ushort)value:X} at offset {il.Offset - 1}");
+                throw new BadImageFormatException($"unknown IL opcode 0x{(ushort)value:X} at offset {start}");
+            }
+
+            var size = OperandSize(il, at, operand);
+            if (at + size > il.Length)
+            {
+                throw new BadImageFormatException($"IL operand of the instruction at offset {start} runs past the end of the body");
             }
 
             if (operand is OperandType.InlineMethod or OperandType.InlineField or OperandType.InlineType or OperandType.InlineTok)
             {
-                tokens.Add(MetadataTokens.EntityHandle(il.ReadInt32()));
-                continue;
+                tokens.Add(MetadataTokens.EntityHandle(BinaryPrimitives.ReadInt32LittleEndian(il.AsSpan(at, 4))));
             }
 
-            Skip(ref il, operand);
+            at += size;
         }
 
         return tokens;
     }
 
-    private static void Skip(ref BlobReader il, OperandType operand)
+    /// <summary>Bytes of the operand that starts at <paramref name="at"/>; a switch is its count plus 4 bytes per target.</summary>
+    private static int OperandSize(byte[] il, int at, OperandType operand) => operand switch
     {
-        switch (operand)
-        {
-            case OperandType.InlineNone:
-                return;
-            case OperandType.ShortInlineBrTarget or OperandType.ShortInlineI or OperandType.ShortInlineVar:
-                il.Offset += 1;
-                return;
-            case OperandType.InlineVar:
-                il.Offset += 2;
-                return;
-            case OperandType.InlineI8 or OperandType.InlineR:
-                il.Offset += 8;
-                return;
-            case OperandType.InlineSwitch:
-                il.Offset += 4 * il.ReadInt32();
-                return;
-            default:
-                il.Offset += 4;
-                return;
-        }
-    }
+        OperandType.InlineNone => 0,
+        OperandType.ShortInlineBrTarget or OperandType.ShortInlineI or OperandType.ShortInlineVar => 1,
+        OperandType.InlineVar => 2,
+        OperandType.InlineI8 or OperandType.InlineR => 8,
+        OperandType.InlineSwitch when at + 4 <= il.Length => 4 + (4 * (int)Math.Min(BinaryPrimitives.ReadUInt32LittleEndian(il.AsSpan(at, 4)), int.MaxValue / 8)),
+        OperandType.InlineSwitch => 4,
+        _ => 4,
+    };
 }

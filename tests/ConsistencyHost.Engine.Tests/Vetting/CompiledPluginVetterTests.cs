@@ -108,6 +108,23 @@ public sealed class CompiledPluginVetterTests
     }
 
     [Fact]
+    public void ILTokens_SwitchInstruction_StepsOverCountAndTargets()
+    {
+        // ECMA-335 III.3.66: switch (0x45) takes a uint32 count N followed by N int32 targets. A reader that loses
+        // the count's four bytes lands inside the targets (an optimised build's iterator refused with "unknown IL
+        // opcode"). Here: switch with one target 0xA6 (an unused opcode byte if misread), call 0x0A000001, ret.
+        byte[] il = [0x45, 0x01, 0x00, 0x00, 0x00, 0xA6, 0x00, 0x00, 0x00, 0x28, 0x01, 0x00, 0x00, 0x0A, 0x2A];
+
+        var tokens = ILTokens.Of(il);
+
+        Assert.Equal(0x0A000001, System.Reflection.Metadata.Ecma335.MetadataTokens.GetToken(Assert.Single(tokens)));
+    }
+
+    [Fact]
+    public void ILTokens_TruncatedOperand_IsBadImageNotACrash() =>
+        Assert.Throws<BadImageFormatException>(() => ILTokens.Of([0x28, 0x01, 0x00]));
+
+    [Fact]
     public void Vet_IteratorLambdaCacheAndCollectionExpression_CompilerGeneratedCodeIsAccepted()
     {
         // Iterators read Environment.CurrentManagedThreadId and cache lambdas in static fields of generated types.
