@@ -48,5 +48,5 @@ public sealed class EntryCheckService(CheckEngine engine) : EntryCheck.EntryChec
 
     /// <inheritdoc />
     public override Task<ListRulesResponse> ListRules(ListRulesRequest request, ServerCallContext context) =>
-        Task.FromResult(ReportMapper.ToRuleList(engine.Rules));
+        Task.FromResult(ReportMapper.ToRuleList(engine));
 }
