@@ -20,7 +20,7 @@ namespace ConsistencyHost.Engine.Profiles;
 /// </example>
 public static class EngineConfiguration
 {
-    private static readonly string[] RootKeys = ["PluginsPath", "DefaultProfile", "RuleDeadlineMs", "Profiles", "TrustedPlugins"];
+    private static readonly string[] RootKeys = ["PluginsPath", "DefaultProfile", "RuleDeadlineMs", "Profiles", "TrustedPlugins", "Isolation"];
     private static readonly string[] ProfileKeys = ["OnlyListedRules", "Rules"];
     private static readonly string[] RuleKeys = ["Enabled", "DeadlineMs", "Options", "Severities"];
 

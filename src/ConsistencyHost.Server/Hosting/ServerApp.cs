@@ -34,11 +34,15 @@ public static class ServerApp
         });
         AddOverrides(builder.Configuration, launch);
 
-        var engine = new CheckEngine(EngineConfiguration.Read(builder.Configuration.GetSection("ConsistencyHost"), DefaultPluginsPath));
+        var section = builder.Configuration.GetSection("ConsistencyHost");
+        var executor = IsolationConfiguration.CreateExecutor(section.GetSection("Isolation"));
+        var engine = new CheckEngine(EngineConfiguration.Read(section, DefaultPluginsPath), isolatedExecutor: executor);
         var server = ReadServerOptions(builder.Configuration.GetSection("Server"));
         ConfigureKestrel(builder.WebHost, server);
 
         builder.Services.AddSingleton(engine);
+        // Registered through a factory so that the container disposes it at shutdown, killing every worker.
+        if (executor is not null) builder.Services.AddSingleton(_ => executor);
         builder.Services.AddSingleton(new ConcurrencyGateOptions(server.MaxConcurrentCalls, server.QueueLimit));
         builder.Services.AddSingleton(new ConcurrencyLimiter(new ConcurrencyLimiterOptions
         {
