@@ -36,6 +36,13 @@ public sealed record IsolationOptions
     /// <summary>Put workers in a fresh network namespace (no network at all) when <c>unshare</c> allows it here.</summary>
     public bool IsolateNetwork { get; init; } = true;
 
+    /// <summary>
+    /// The user (and group) id workers run as, through <c>setpriv</c>. Null runs them as the host's user. When
+    /// the host runs as root the default is 65534 ("nobody" on Debian): a worker then cannot read the host's
+    /// files or signal it. A host that does not run as root cannot switch users, and workers share its user.
+    /// </summary>
+    public int? WorkerUserId { get; init; } = Environment.IsPrivilegedProcess && File.Exists(WorkerCommand.Setpriv) ? 65534 : null;
+
     /// <summary>The clock for the crash window.</summary>
     public TimeProvider Clock { get; init; } = TimeProvider.System;
 }

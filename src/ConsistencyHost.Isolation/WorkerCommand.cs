@@ -5,13 +5,16 @@ namespace ConsistencyHost.Isolation;
 
 /// <summary>
 /// The command line and environment a worker starts with: <c>prlimit</c> for resource limits, <c>unshare --net</c>
-/// for an empty network namespace, then <c>dotnet</c> with the worker; an environment of only what .NET needs.
+/// for an empty network namespace, <c>setpriv</c> to drop to an unprivileged user, then <c>dotnet</c> with the worker; an environment of only what .NET needs.
 /// Each wrapper execs the next, so the worker is the host's direct child and inherits its standard input.
 /// </summary>
 internal static class WorkerCommand
 {
     private const string Prlimit = "/usr/bin/prlimit";
     private const string Unshare = "/usr/bin/unshare";
+
+    /// <summary>util-linux setpriv: drops to another user and sets no_new_privs before exec.</summary>
+    public const string Setpriv = "/usr/bin/setpriv";
 
     public static ProcessStartInfo Build(IsolationOptions options, string pluginAssembly, string privateDirectory, string socketPath)
     {
@@ -32,6 +35,11 @@ internal static class WorkerCommand
         if (options.IsolateNetwork && NetworkNamespace.Arguments is { } unshare)
         {
             command.AddRange([Unshare, .. unshare]);
+        }
+
+        if (options.WorkerUserId is { } user)
+        {
+            command.AddRange([Setpriv, $"--reuid={user}", $"--regid={user}", "--clear-groups", "--no-new-privs"]);
         }
 
         command.AddRange([DotnetMuxer.Path, options.WorkerAssemblyPath, "--plugin", pluginAssembly, "--socket", socketPath]);

@@ -45,6 +45,7 @@ internal sealed class WorkerProcess : IAsyncDisposable
         if (!OperatingSystem.IsWindows())
         {
             File.SetUnixFileMode(directory, UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.UserExecute);
+            if (options.WorkerUserId is { } user) FileOwner.Change(directory, user);
         }
 
         var socket = Path.Combine(directory, "worker.sock");
