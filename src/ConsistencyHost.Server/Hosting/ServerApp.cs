@@ -41,8 +41,6 @@ public static class ServerApp
         ConfigureKestrel(builder.WebHost, server);
 
         builder.Services.AddSingleton(engine);
-        // Registered through a factory so that the container disposes it at shutdown, killing every worker.
-        if (executor is not null) builder.Services.AddSingleton(_ => executor);
         builder.Services.AddSingleton(new ConcurrencyGateOptions(server.MaxConcurrentCalls, server.QueueLimit));
         builder.Services.AddSingleton(new ConcurrencyLimiter(new ConcurrencyLimiterOptions
         {
@@ -62,6 +60,12 @@ public static class ServerApp
         builder.Services.AddGrpcHealthChecks().AddCheck("plugins", () => PluginHealth(engine));
 
         var app = builder.Build();
+        if (executor is not null)
+        {
+            // Every worker is killed when the host stops (and exits by itself if the host dies without stopping).
+            app.Lifetime.ApplicationStopped.Register(executor.Dispose);
+        }
+
         app.MapGrpcService<EntryCheckService>();
         app.MapGrpcHealthChecksService();
         app.MapGrpcReflectionService();
