@@ -47,7 +47,10 @@ public sealed class RuleRunner(IRuleExecutor? isolated = null)
     {
         if (RunsIsolated(rule))
         {
-            return new StartedRun(null, null, Stopwatch.StartNew(), null, isolated!.RunAsync(rule, submission, cancellationToken));
+            var started = Stopwatch.StartNew();
+            var run = isolated!.RunAsync(rule, submission, cancellationToken);
+            _ = run.ContinueWith(_ => started.Stop(), CancellationToken.None, TaskContinuationOptions.ExecuteSynchronously, TaskScheduler.Default);
+            return new StartedRun(null, null, started, null, run);
         }
 
         if (_runaways.TryGetValue(rule.Descriptor.Id, out var previous) && !previous.IsCompleted)
@@ -60,7 +63,18 @@ public sealed class RuleRunner(IRuleExecutor? isolated = null)
         var clock = Stopwatch.StartNew();
         // Take the token now: the source is disposed after the wait, possibly before a queued task starts.
         var token = deadline.Token;
-        var task = Task.Run(() => Execute(rule, entry, token), CancellationToken.None);
+        // The clock stops when the rule returns, so a rule awaited after a slow one reports its own time.
+        var task = Task.Run(() =>
+        {
+            try
+            {
+                return Execute(rule, entry, token);
+            }
+            finally
+            {
+                clock.Stop();
+            }
+        }, CancellationToken.None);
         return new StartedRun(task, deadline, clock, null, null);
     }
 
