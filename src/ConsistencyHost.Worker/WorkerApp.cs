@@ -39,10 +39,23 @@ internal static class WorkerApp
         await Console.Out.FlushAsync();
 
         await HostGone();
-        // The host closed our standard input (it stopped, or it died and the kernel closed the pipe): exit at
-        // once, even if a rule is still spinning on another thread.
+        // The host closed our standard input (it stopped, or it died and the kernel closed the pipe): remove
+        // the private folder a dead host cannot, and exit at once, even if a rule is still spinning.
+        RemovePrivateFolder(arguments.SocketPath);
         Environment.Exit(0);
         return 0;
+    }
+
+    private static void RemovePrivateFolder(string socketPath)
+    {
+        try
+        {
+            Directory.Delete(Path.GetDirectoryName(socketPath)!, recursive: true);
+        }
+        catch (Exception error) when (error is IOException or UnauthorizedAccessException)
+        {
+            // The host removes it when it stops normally; the OS cleans the temporary folder otherwise.
+        }
     }
 
     /// <summary>Completes when standard input reaches end of file: the host owns the other end.</summary>
