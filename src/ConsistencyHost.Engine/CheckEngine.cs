@@ -14,16 +14,28 @@ public sealed class CheckEngine
 {
     private readonly IReadOnlyDictionary<string, ResolvedProfile> _profiles;
     private readonly EntryIntake _intake;
-    private readonly RuleRunner _runner = new();
+    private readonly RuleRunner _runner;
+    private readonly IRuleExecutor? _isolated;
 
     /// <summary>Discovers plugins and validates every profile; throws <see cref="ProfileConfigurationException"/>.</summary>
-    public CheckEngine(EngineOptions options, IntakeLimits? limits = null)
+    /// <param name="options">Plugin folder, profiles, deadlines and the trusted plugins.</param>
+    /// <param name="limits">Intake limits; null for the defaults.</param>
+    /// <param name="isolatedExecutor">Runs untrusted rules out of process; null runs every rule in-process.</param>
+    public CheckEngine(EngineOptions options, IntakeLimits? limits = null, IRuleExecutor? isolatedExecutor = null)
     {
         Options = options;
-        Rules = PluginDiscovery.Discover(options.PluginsPath, options.SourcePluginCachePath);
+        Rules = [.. PluginDiscovery.Discover(options.PluginsPath, options.SourcePluginCachePath).Select(rule => WithTrust(rule, options))];
         _profiles = ProfileResolver.ResolveAll(options, Rules);
         _intake = new EntryIntake(limits ?? IntakeLimits.Default);
+        _isolated = isolatedExecutor;
+        _runner = new RuleRunner(isolatedExecutor);
     }
+
+    /// <summary>Where a loaded rule runs: "in-process" or "worker".</summary>
+    public string IsolationOf(RuleDescriptor rule) => _isolated is not null && !rule.IsTrusted ? "worker" : "in-process";
+
+    /// <summary>Why a rule is currently held back (its plugin is quarantined after repeated crashes), or null.</summary>
+    public string? HeldBackReason(RuleDescriptor rule) => _isolated is not null && !rule.IsTrusted ? _isolated.HeldBackReason(rule) : null;
 
     /// <summary>The options the engine was built with.</summary>
     public EngineOptions Options { get; }
@@ -42,7 +54,7 @@ public sealed class CheckEngine
     {
         var profile = ResolveProfile(submission.Profile);
         var entry = _intake.Build(submission);
-        var (findings, runs) = _runner.Run(entry, profile, cancellationToken);
+        var (findings, runs) = _runner.Run(entry, submission, profile, cancellationToken);
         return new CheckReport
         {
             EntryId = submission.EntryId,
@@ -54,6 +66,9 @@ public sealed class CheckEngine
                 : null,
         };
     }
+
+    private static RuleDescriptor WithTrust(RuleDescriptor rule, EngineOptions options) =>
+        rule with { IsTrusted = !PluginDiscovery.IsSourcePlugin(rule.Plugin) && options.TrustedPlugins.Contains(rule.PluginName) };
 
     private ResolvedProfile ResolveProfile(string? name)
     {

@@ -24,6 +24,28 @@ public sealed record EngineOptions
     /// </summary>
     public TimeSpan RuleDeadline { get; init; } = TimeSpan.FromSeconds(2);
 
+    /// <summary>
+    /// Names of the plugins (assembly names, without ".dll") trusted to run inside the host process; every
+    /// other plugin, and every source plugin, is untrusted and runs in a worker process when the engine has a
+    /// worker executor. The default is the rule plugins shipped with the host (<see cref="BuiltInPlugins"/>).
+    /// </summary>
+    /// <remarks>
+    /// Trust goes by name because whoever controls the plugin folder controls which files carry those names;
+    /// a lab that wants its own plugin in-process lists it here and accepts that it can take the host down.
+    /// </remarks>
+    public IReadOnlySet<string> TrustedPlugins { get; init; } = BuiltInPlugins;
+
+    /// <summary>The rule plugins built and shipped with the host.</summary>
+    public static IReadOnlySet<string> BuiltInPlugins { get; } = new HashSet<string>(StringComparer.Ordinal)
+    {
+        "ConsistencyHost.Rules.CouplingPartners",
+        "ConsistencyHost.Rules.IntegralRatio",
+        "ConsistencyHost.Rules.MassFormula",
+        "ConsistencyHost.Rules.SignalCount",
+        "ConsistencyHost.Rules.SolventResidual",
+        "ConsistencyHost.Rules.SpectrumMetadata",
+    };
+
     /// <summary>Configured profiles; a "default" profile with every rule at its defaults is added when absent.</summary>
     public IReadOnlyList<Profile> Profiles { get; init; } = [];
 }

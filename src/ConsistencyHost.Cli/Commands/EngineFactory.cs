@@ -28,14 +28,22 @@ internal static class EngineFactory
 
         try
         {
-            var options = EngineConfiguration.Read(configuration.Build().GetSection("ConsistencyHost"), ServerApp.DefaultPluginsPath);
+            var section = configuration.Build().GetSection("ConsistencyHost");
+            var options = EngineConfiguration.Read(section, ServerApp.DefaultPluginsPath);
             if (args.Value("--plugins") is { } plugins)
             {
                 if (!Directory.Exists(plugins)) throw new UsageException($"plugin folder '{plugins}' does not exist");
                 options = options with { PluginsPath = Path.GetFullPath(plugins) };
             }
 
-            return new CheckEngine(options);
+            var executor = IsolationConfiguration.CreateExecutor(section.GetSection("Isolation"));
+            if (executor is not null)
+            {
+                // Workers also exit when the command's end of their standard input closes; this just does it first.
+                AppDomain.CurrentDomain.ProcessExit += (_, _) => executor.Dispose();
+            }
+
+            return new CheckEngine(options, isolatedExecutor: executor);
         }
         catch (ProfileConfigurationException error)
         {

@@ -19,7 +19,7 @@ internal static class RulesCommand
     {
         var args = ParsedArguments.Parse(raw, Valued, []);
         var format = OutputFormats.Parse(args.Value("--format"));
-        var list = ReportMapper.ToRuleList(EngineFactory.Create(args).Rules);
+        var list = ReportMapper.ToRuleList(EngineFactory.Create(args));
         if (format == OutputFormat.Json)
         {
             stdout.Write(JsonOutput.Format(list) + "\n");
@@ -28,8 +28,13 @@ internal static class RulesCommand
 
         foreach (var rule in list.Rules)
         {
-            var status = rule.LoadStatus == Contract.V1.RuleLoadStatus.Loaded ? "loaded" : "REFUSED: " + rule.LoadMessage;
-            stdout.Write(string.Create(CultureInfo.InvariantCulture, $"{rule.Id,-24} {rule.Version,-8} {rule.Plugin,-48} {status}\n"));
+            var status = rule.LoadStatus switch
+            {
+                Contract.V1.RuleLoadStatus.Loaded => "loaded",
+                Contract.V1.RuleLoadStatus.Quarantined => "QUARANTINED: " + rule.LoadMessage,
+                _ => "REFUSED: " + rule.LoadMessage,
+            };
+            stdout.Write(string.Create(CultureInfo.InvariantCulture, $"{rule.Id,-24} {rule.Version,-8} {rule.Plugin,-48} {rule.Isolation,-10} {status}\n"));
             if (rule.Title.Length > 0) stdout.Write($"    {rule.Title}\n");
         }
 

@@ -42,20 +42,27 @@ public static class ReportMapper
         InputError = new InputError { Field = field, Reason = reason },
     };
 
+    /// <summary>Maps the rule catalogue of an engine: where each rule runs, and quarantined rules with the reason.</summary>
+    public static ListRulesResponse ToRuleList(Engine.CheckEngine engine) =>
+        ToRuleList(engine.Rules, engine.IsolationOf, engine.HeldBackReason);
+
     /// <summary>Maps the rule catalogue.</summary>
-    public static ListRulesResponse ToRuleList(IEnumerable<RuleDescriptor> rules)
+    public static ListRulesResponse ToRuleList(
+        IEnumerable<RuleDescriptor> rules, Func<RuleDescriptor, string>? isolation = null, Func<RuleDescriptor, string?>? heldBack = null)
     {
         var response = new ListRulesResponse();
         foreach (var rule in rules)
         {
+            var held = rule.IsLoaded ? heldBack?.Invoke(rule) : null;
             var info = new RuleInfo
             {
                 Id = rule.Id,
                 Version = rule.Version,
                 Title = rule.Title,
                 Plugin = rule.Plugin,
-                LoadStatus = rule.IsLoaded ? RuleLoadStatus.Loaded : RuleLoadStatus.Refused,
-                LoadMessage = rule.LoadMessage,
+                LoadStatus = !rule.IsLoaded ? RuleLoadStatus.Refused : held is null ? RuleLoadStatus.Loaded : RuleLoadStatus.Quarantined,
+                LoadMessage = held ?? rule.LoadMessage,
+                Isolation = rule.IsLoaded ? isolation?.Invoke(rule) ?? "in-process" : "",
             };
             info.Nuclei.AddRange(rule.Nuclei);
             response.Rules.Add(info);
@@ -66,11 +73,17 @@ public static class ReportMapper
 
     private static Finding ToWire(ReportedFinding reported)
     {
-        var finding = reported.Finding;
+        var wire = ToWire(reported.Finding);
+        wire.RuleId = reported.RuleId;
+        wire.RuleVersion = reported.RuleVersion;
+        return wire;
+    }
+
+    /// <summary>Maps a rule's finding without its rule stamp (the worker sends findings this way).</summary>
+    public static Finding ToWire(Sdk.Findings.Finding finding)
+    {
         var wire = new Finding
         {
-            RuleId = reported.RuleId,
-            RuleVersion = reported.RuleVersion,
             Code = finding.Code,
             Severity = ToWire(finding.Severity),
             Message = finding.Message,
@@ -91,6 +104,8 @@ public static class ReportMapper
             EngineStatus.Failed => WireStatus.Failed,
             EngineStatus.TimedOut => WireStatus.TimedOut,
             EngineStatus.Skipped => WireStatus.Skipped,
+            EngineStatus.Crashed => WireStatus.Crashed,
+            EngineStatus.Quarantined => WireStatus.Quarantined,
             _ => WireStatus.RunStatusUnspecified,
         },
         ElapsedMs = run.Elapsed.TotalMilliseconds,
@@ -98,7 +113,8 @@ public static class ReportMapper
         FindingCount = run.FindingCount,
     };
 
-    private static WireSeverity ToWire(SdkSeverity severity) => severity switch
+    /// <summary>Maps a severity onto the wire.</summary>
+    public static WireSeverity ToWire(SdkSeverity severity) => severity switch
     {
         SdkSeverity.Info => WireSeverity.Info,
         SdkSeverity.Warning => WireSeverity.Warning,

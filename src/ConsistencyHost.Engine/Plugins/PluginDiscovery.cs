@@ -87,6 +87,16 @@ public static class PluginDiscovery
             : [Refused(plugin, "refused by source vetting: " + string.Join("; ", result.Problems), name)];
     }
 
+    /// <summary>
+    /// Vets and loads one plugin assembly and every assembly in its folder, as discovery does for a folder;
+    /// a worker process uses it to load the one plugin it serves.
+    /// </summary>
+    public static IReadOnlyList<RuleDescriptor> LoadAssembly(string assemblyPath)
+    {
+        var folder = Path.GetDirectoryName(Path.GetFullPath(assemblyPath))!;
+        return LoadPlugin(assemblyPath, [.. Directory.EnumerateFiles(folder, "*.dll", SearchOption.AllDirectories).Order(StringComparer.Ordinal)]);
+    }
+
     private static string? Vet(IReadOnlyList<string> assemblies)
     {
         foreach (var path in assemblies)
@@ -157,6 +167,7 @@ public static class PluginDiscovery
             Nuclei = metadata.Nuclei,
             Plugin = plugin,
             OptionsType = probe.OptionsType,
+            AssemblyPath = type.Assembly.Location,
             Factory = () => (IRule)Activator.CreateInstance(type)!,
         };
     }
@@ -166,8 +177,11 @@ public static class PluginDiscovery
     private static RuleDescriptor Refused(string plugin, string reason, string? id = null) =>
         new() { Id = id ?? PluginName(plugin), Plugin = plugin, LoadMessage = reason };
 
+    /// <summary>True for a plugin compiled by the host from a folder of sources: never trusted in-process.</summary>
+    internal static bool IsSourcePlugin(string plugin) => plugin.EndsWith(SourceSuffix, StringComparison.Ordinal);
+
     /// <summary>"Lab.Rules.dll" → "Lab.Rules"; "Lab.Rules (source)" → "Lab.Rules".</summary>
-    private static string PluginName(string plugin) =>
+    internal static string PluginName(string plugin) =>
         plugin.EndsWith(SourceSuffix, StringComparison.Ordinal) ? plugin[..^SourceSuffix.Length] : Path.GetFileNameWithoutExtension(plugin);
 
     private static IReadOnlyList<RuleDescriptor> RefuseDuplicateIds(List<RuleDescriptor> found)

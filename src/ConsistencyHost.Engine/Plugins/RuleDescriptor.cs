@@ -31,4 +31,16 @@ public sealed record RuleDescriptor
 
     /// <summary>The rule's options type; null when refused.</summary>
     public Type? OptionsType { get; init; }
+
+    /// <summary>Full path of the loaded plugin assembly (a worker loads the same file); empty when refused.</summary>
+    public string AssemblyPath { get; init; } = "";
+
+    /// <summary>
+    /// True when the plugin is trusted to run inside the host process (see <see cref="EngineOptions.TrustedPlugins"/>);
+    /// an untrusted rule runs in a worker process whenever the engine has a worker executor.
+    /// </summary>
+    public bool IsTrusted { get; init; }
+
+    /// <summary>The plugin's name: the assembly name, or the folder name of a source plugin.</summary>
+    public string PluginName => PluginDiscovery.PluginName(Plugin);
 }

@@ -12,6 +12,7 @@ namespace ConsistencyHost.Engine.Profiles;
 /// <code>
 /// "ConsistencyHost": {
 ///   "PluginsPath": "plugins", "DefaultProfile": "default", "RuleDeadlineMs": 2000,
+///   "TrustedPlugins": [ "ConsistencyHost.Rules.SpectrumMetadata", "Lab.Rules" ],
 ///   "Profiles": { "publication": { "Rules": { "spectrum-metadata": {
 ///       "Options": { "RequireTemperature": "true" }, "Severities": { "solvent-not-stated": "error" } } } } }
 /// }
@@ -19,7 +20,7 @@ namespace ConsistencyHost.Engine.Profiles;
 /// </example>
 public static class EngineConfiguration
 {
-    private static readonly string[] RootKeys = ["PluginsPath", "DefaultProfile", "RuleDeadlineMs", "Profiles"];
+    private static readonly string[] RootKeys = ["PluginsPath", "DefaultProfile", "RuleDeadlineMs", "Profiles", "TrustedPlugins", "Isolation"];
     private static readonly string[] ProfileKeys = ["OnlyListedRules", "Rules"];
     private static readonly string[] RuleKeys = ["Enabled", "DeadlineMs", "Options", "Severities"];
 
@@ -34,9 +35,16 @@ public static class EngineConfiguration
             DefaultProfile = section["DefaultProfile"] is { Length: > 0 } name ? name : Profile.DefaultName,
             RuleDeadline = ReadMilliseconds(section, "RuleDeadlineMs", problems) ?? TimeSpan.FromSeconds(2),
             Profiles = [.. section.GetSection("Profiles").GetChildren().Select(p => ReadProfile(p, problems))],
+            TrustedPlugins = ReadTrusted(section.GetSection("TrustedPlugins")),
         };
         return problems.Count == 0 ? options : throw new ProfileConfigurationException(problems);
     }
+
+    /// <summary>An absent list keeps the built-in plugins trusted; a present one replaces that default.</summary>
+    private static IReadOnlySet<string> ReadTrusted(IConfigurationSection section) =>
+        section.Exists()
+            ? section.GetChildren().Select(c => c.Value ?? "").Where(v => v.Length > 0).ToHashSet(StringComparer.Ordinal)
+            : EngineOptions.BuiltInPlugins;
 
     private static Profile ReadProfile(IConfigurationSection section, List<string> problems)
     {

@@ -38,6 +38,10 @@ public enum RuleRunStatus
     TimedOut = 3,
     /// <summary>Not run.</summary>
     Skipped = 4,
+    /// <summary>Its worker process died during the run (stack overflow, out of memory, exit); findings discarded.</summary>
+    Crashed = 5,
+    /// <summary>Not run: its plugin crashed too often recently and is held back until the window passes.</summary>
+    Quarantined = 6,
 }
 
 /// <summary>How one rule ran on the entry.</summary>

@@ -1,5 +1,6 @@
 using System.Collections.Concurrent;
 using System.Diagnostics;
+using ConsistencyHost.Engine.Intake;
 using ConsistencyHost.Engine.Profiles;
 using ConsistencyHost.Engine.Reports;
 using ConsistencyHost.Sdk.Entries;
@@ -8,24 +9,28 @@ using ConsistencyHost.Sdk.Findings;
 namespace ConsistencyHost.Engine.Running;
 
 /// <summary>
-/// Runs the rules of a profile on one entry. Each rule runs on the thread pool with its own deadline; an
-/// exception becomes <see cref="RuleRunStatus.Failed"/>, an overrun <see cref="RuleRunStatus.TimedOut"/>,
-/// and the other rules' findings are kept.
+/// Runs the rules of a profile on one entry. Trusted rules run on the thread pool with their own deadline;
+/// untrusted ones go to the <see cref="IRuleExecutor"/> when there is one. An exception becomes
+/// <see cref="RuleRunStatus.Failed"/>, an overrun <see cref="RuleRunStatus.TimedOut"/>, and the other rules'
+/// findings are kept.
 /// </summary>
 /// <remarks>
 /// An in-process rule that ignores cancellation cannot be stopped: its thread runs on after the deadline.
 /// So that a runaway rule cannot eat the thread pool, a rule whose previous run is still going is skipped
 /// until that run ends. Untrusted plugins belong in a worker process, where an overrun kills the process.
 /// </remarks>
-public sealed class RuleRunner
+public sealed class RuleRunner(IRuleExecutor? isolated = null)
 {
     private readonly ConcurrentDictionary<string, Task> _runaways = new(StringComparer.Ordinal);
 
+    /// <summary>True when the rule goes to the worker executor rather than the thread pool.</summary>
+    public bool RunsIsolated(ActiveRule rule) => isolated is not null && !rule.Descriptor.IsTrusted;
+
     /// <summary>Runs every active rule and collects findings and run records.</summary>
     public (IReadOnlyList<ReportedFinding> Findings, IReadOnlyList<RuleRunRecord> Runs) Run(
-        IEntryView entry, ResolvedProfile profile, CancellationToken cancellationToken)
+        IEntryView entry, EntrySubmission submission, ResolvedProfile profile, CancellationToken cancellationToken)
     {
-        var started = profile.Rules.Select(rule => (Rule: rule, Run: Start(rule, entry, cancellationToken))).ToList();
+        var started = profile.Rules.Select(rule => (Rule: rule, Run: Start(rule, entry, submission, cancellationToken))).ToList();
         var findings = new List<ReportedFinding>();
         var runs = new List<RuleRunRecord>(started.Count);
         foreach (var (rule, run) in started)
@@ -38,8 +43,16 @@ public sealed class RuleRunner
         return (findings, runs);
     }
 
-    private StartedRun Start(ActiveRule rule, IEntryView entry, CancellationToken cancellationToken)
+    private StartedRun Start(ActiveRule rule, IEntryView entry, EntrySubmission submission, CancellationToken cancellationToken)
     {
+        if (RunsIsolated(rule))
+        {
+            var started = Stopwatch.StartNew();
+            var run = isolated!.RunAsync(rule, submission, cancellationToken);
+            _ = run.ContinueWith(_ => started.Stop(), CancellationToken.None, TaskContinuationOptions.ExecuteSynchronously, TaskScheduler.Default);
+            return new StartedRun(null, null, started, null, run);
+        }
+
         if (_runaways.TryGetValue(rule.Descriptor.Id, out var previous) && !previous.IsCompleted)
         {
             return StartedRun.Skipped("its previous run overran its deadline and is still running");
@@ -50,8 +63,19 @@ public sealed class RuleRunner
         var clock = Stopwatch.StartNew();
         // Take the token now: the source is disposed after the wait, possibly before a queued task starts.
         var token = deadline.Token;
-        var task = Task.Run(() => Execute(rule, entry, token), CancellationToken.None);
-        return new StartedRun(task, deadline, clock, null);
+        // The clock stops when the rule returns, so a rule awaited after a slow one reports its own time.
+        var task = Task.Run(() =>
+        {
+            try
+            {
+                return Execute(rule, entry, token);
+            }
+            finally
+            {
+                clock.Stop();
+            }
+        }, CancellationToken.None);
+        return new StartedRun(task, deadline, clock, null, null);
     }
 
     private static List<Finding> Execute(ActiveRule rule, IEntryView entry, CancellationToken token)
@@ -76,8 +100,13 @@ public sealed class RuleRunner
             return (new RuleRunRecord(id, version, RuleRunStatus.Skipped, TimeSpan.Zero, run.SkipReason, 0), []);
         }
 
+        if (run.Isolated is not null)
+        {
+            return AwaitIsolated(rule, run.Isolated, run.Clock!);
+        }
+
         using var deadline = run.Deadline!;
-        var finished = WaitQuietly(run.Task!, rule.Deadline);
+        var finished = WaitQuietly(run.Task!, rule.Deadline + TimeSpan.FromMilliseconds(50));
         var elapsed = run.Clock!.Elapsed;
         if (!finished || (run.Task!.IsCanceled && deadline.IsCancellationRequested))
         {
@@ -95,12 +124,33 @@ public sealed class RuleRunner
         return (new RuleRunRecord(id, version, RuleRunStatus.Ok, elapsed, "", findings.Count), findings);
     }
 
-    private static bool WaitQuietly(Task task, TimeSpan deadline)
+    private (RuleRunRecord Record, IEnumerable<ReportedFinding> Findings) AwaitIsolated(ActiveRule rule, Task<ExecutorResult> task, Stopwatch clock)
+    {
+        var (id, version) = (rule.Descriptor.Id, rule.Descriptor.Version);
+        // The executor enforces the deadline itself (by killing its worker); this wait only guards against
+        // an executor that breaks its own promise.
+        if (!WaitQuietly(task, rule.Deadline + isolated!.Overhead))
+        {
+            return (new RuleRunRecord(id, version, RuleRunStatus.TimedOut, clock.Elapsed, "the worker executor did not answer in time", 0), []);
+        }
+
+        if (!task.IsCompletedSuccessfully)
+        {
+            var error = task.Exception?.GetBaseException();
+            return (new RuleRunRecord(id, version, RuleRunStatus.Failed, clock.Elapsed, $"worker executor error: {error?.Message ?? "cancelled"}", 0), []);
+        }
+
+        var result = task.Result;
+        var findings = result.Status == RuleRunStatus.Ok ? result.Findings.Select(f => Stamp(rule, f)).ToList() : [];
+        return (new RuleRunRecord(id, version, result.Status, clock.Elapsed, result.Message, findings.Count), findings);
+    }
+
+    private static bool WaitQuietly(Task task, TimeSpan limit)
     {
         try
         {
-            // A little grace over the deadline: a rule that observes cancellation needs a moment to unwind.
-            return task.Wait(deadline + TimeSpan.FromMilliseconds(50));
+            // The caller adds a little grace: a rule that observes cancellation needs a moment to unwind.
+            return task.Wait(limit);
         }
         catch (AggregateException)
         {
@@ -114,8 +164,9 @@ public sealed class RuleRunner
         return new ReportedFinding(rule.Descriptor.Id, rule.Descriptor.Version, finding with { Severity = severity });
     }
 
-    private sealed record StartedRun(Task<List<Finding>>? Task, CancellationTokenSource? Deadline, Stopwatch? Clock, string? SkipReason)
+    private sealed record StartedRun(
+        Task<List<Finding>>? Task, CancellationTokenSource? Deadline, Stopwatch? Clock, string? SkipReason, Task<ExecutorResult>? Isolated)
     {
-        public static StartedRun Skipped(string reason) => new(null, null, null, reason);
+        public static StartedRun Skipped(string reason) => new(null, null, null, reason, null);
     }
 }

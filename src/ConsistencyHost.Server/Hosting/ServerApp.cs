@@ -32,7 +32,9 @@ public static class ServerApp
         });
         AddOverrides(builder.Configuration, launch);
 
-        var engine = new CheckEngine(EngineConfiguration.Read(builder.Configuration.GetSection("ConsistencyHost"), DefaultPluginsPath));
+        var section = builder.Configuration.GetSection("ConsistencyHost");
+        var executor = IsolationConfiguration.CreateExecutor(section.GetSection("Isolation"));
+        var engine = new CheckEngine(EngineConfiguration.Read(section, DefaultPluginsPath), isolatedExecutor: executor);
         var server = ReadServerOptions(builder.Configuration.GetSection("Server"));
         var endpoints = new ServerEndpoints();
         ConfigureKestrel(builder.WebHost, server, endpoints);
@@ -59,6 +61,12 @@ public static class ServerApp
 
         var app = builder.Build();
         JsonBodyLimit.Use(app, endpoints, server.MaxReceiveMessageBytes);
+        if (executor is not null)
+        {
+            // Every worker is killed when the host stops (and exits by itself if the host dies without stopping).
+            app.Lifetime.ApplicationStopped.Register(executor.Dispose);
+        }
+
         app.MapGrpcService<EntryCheckService>();
         app.MapGrpcHealthChecksService();
         app.MapGrpcReflectionService();

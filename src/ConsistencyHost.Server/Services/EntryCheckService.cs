@@ -48,7 +48,7 @@ public sealed class EntryCheckService(CheckEngine engine, ILogger<EntryCheckServ
 
     /// <inheritdoc />
     public override Task<ListRulesResponse> ListRules(ListRulesRequest request, ServerCallContext context) =>
-        Task.FromResult(ReportMapper.ToRuleList(engine.Rules));
+        Task.FromResult(ReportMapper.ToRuleList(engine));
 
     private CheckEntryResponse Check(CheckEntryRequest request, CancellationToken cancellationToken)
     {
@@ -73,7 +73,7 @@ public sealed class EntryCheckService(CheckEngine engine, ILogger<EntryCheckServ
     {
         foreach (var run in response.RuleRuns)
         {
-            if (run.Status is Contract.V1.RuleRunStatus.Failed or Contract.V1.RuleRunStatus.TimedOut)
+            if (run.Status is Contract.V1.RuleRunStatus.Failed or Contract.V1.RuleRunStatus.TimedOut or Contract.V1.RuleRunStatus.Crashed or Contract.V1.RuleRunStatus.Quarantined)
             {
                 CheckLog.RuleDidNotFinish(logger, response.EntryId, run.RuleId, run.Status.ToString(), run.ElapsedMs, run.Message);
             }

@@ -32,6 +32,9 @@ internal sealed class RunningHost : IAsyncDisposable
 
     public int Port => Address.Port;
 
+    /// <summary>The host's temporary plugin folder; workers carry it in their command line.</summary>
+    public string PluginsPath => _plugins.Path;
+
     public static async Task<RunningHost> StartAsync(string[] plugins, string? configFile = null)
     {
         var folder = PluginFolder.With(plugins);

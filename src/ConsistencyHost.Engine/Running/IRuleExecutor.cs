@@ -1,0 +1,36 @@
+using ConsistencyHost.Engine.Intake;
+using ConsistencyHost.Engine.Plugins;
+using ConsistencyHost.Engine.Profiles;
+using ConsistencyHost.Engine.Reports;
+using ConsistencyHost.Sdk.Findings;
+
+namespace ConsistencyHost.Engine.Running;
+
+/// <summary>
+/// Runs the rules of untrusted plugins outside the host process. The engine knows no transport: the gRPC
+/// host and the command line hand it an implementation (a worker-process supervisor); without one, every
+/// rule runs in-process.
+/// </summary>
+public interface IRuleExecutor
+{
+    /// <summary>
+    /// The longest a run may take beyond the rule's own deadline (starting or restarting a worker, killing
+    /// one that overran). The runner waits deadline plus this before it gives up on the executor itself.
+    /// </summary>
+    TimeSpan Overhead { get; }
+
+    /// <summary>
+    /// Runs one rule on one entry. The rule's misbehaviour (a throw, an overrun, a crash, a quarantine) is
+    /// the result's status, never an exception.
+    /// </summary>
+    /// <param name="rule">The rule with its options and deadline.</param>
+    /// <param name="submission">The entry as submitted; the executor's side reads it with the same intake.</param>
+    /// <param name="cancellationToken">Cancelled when the request is abandoned.</param>
+    Task<ExecutorResult> RunAsync(ActiveRule rule, EntrySubmission submission, CancellationToken cancellationToken);
+
+    /// <summary>Why the rule is currently held back (its plugin is quarantined), or null when it can run.</summary>
+    string? HeldBackReason(RuleDescriptor rule);
+}
+
+/// <summary>What an executor reports for one run; findings carry the rule's own severities.</summary>
+public sealed record ExecutorResult(RuleRunStatus Status, string Message, IReadOnlyList<Finding> Findings);

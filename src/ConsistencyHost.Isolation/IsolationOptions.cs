@@ -1,0 +1,48 @@
+namespace ConsistencyHost.Isolation;
+
+/// <summary>How untrusted plugins' worker processes are started, confined and supervised.</summary>
+public sealed record IsolationOptions
+{
+    /// <summary>The worker assembly, run as <c>dotnet ConsistencyHost.Worker.dll</c>; by default in worker/ beside the host.</summary>
+    public string WorkerAssemblyPath { get; init; } = Path.Combine(AppContext.BaseDirectory, "worker", "ConsistencyHost.Worker.dll");
+
+    /// <summary>
+    /// How long a worker may take to load its plugin and print its handshake. A cold .NET start with
+    /// Kestrel takes about a second on an idle machine; thirty seconds covers a loaded, shared one.
+    /// </summary>
+    public TimeSpan StartTimeout { get; init; } = TimeSpan.FromSeconds(30);
+
+    /// <summary>Time allowed past a rule's deadline for its reply to arrive before the worker is killed.</summary>
+    public TimeSpan DeadlineGrace { get; init; } = TimeSpan.FromMilliseconds(500);
+
+    /// <summary>Managed heap limit of a worker (DOTNET_GCHeapHardLimit); an allocation past it throws OutOfMemoryException.</summary>
+    public long ManagedHeapBytes { get; init; } = 256L * 1024 * 1024;
+
+    /// <summary>
+    /// Address-space limit (RLIMIT_AS via prlimit). Generous because the runtime reserves address space far
+    /// beyond what it uses; it caps native allocations the managed limit does not see.
+    /// </summary>
+    public long AddressSpaceBytes { get; init; } = 8L * 1024 * 1024 * 1024;
+
+    /// <summary>Open file descriptors a worker may hold (RLIMIT_NOFILE); Kestrel and the runtime need a few dozen.</summary>
+    public int OpenFiles { get; init; } = 256;
+
+    /// <summary>Worker losses (crashes and overrun kills) within <see cref="CrashWindow"/> that quarantine a plugin.</summary>
+    public int CrashLimit { get; init; } = 3;
+
+    /// <summary>The window for <see cref="CrashLimit"/>; VS Code uses 3 crashes in 5 minutes for its extension host.</summary>
+    public TimeSpan CrashWindow { get; init; } = TimeSpan.FromMinutes(5);
+
+    /// <summary>Put workers in a fresh network namespace (no network at all) when <c>unshare</c> allows it here.</summary>
+    public bool IsolateNetwork { get; init; } = true;
+
+    /// <summary>
+    /// The user (and group) id workers run as, through <c>setpriv</c>. Null runs them as the host's user. When
+    /// the host runs as root the default is 65534 ("nobody" on Debian): a worker then cannot read the host's
+    /// files or signal it. A host that does not run as root cannot switch users, and workers share its user.
+    /// </summary>
+    public int? WorkerUserId { get; init; } = Environment.IsPrivilegedProcess && File.Exists(WorkerCommand.Setpriv) ? 65534 : null;
+
+    /// <summary>The clock for the crash window.</summary>
+    public TimeProvider Clock { get; init; } = TimeProvider.System;
+}

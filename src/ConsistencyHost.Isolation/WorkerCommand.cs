@@ -1,0 +1,67 @@
+using System.Diagnostics;
+using System.Globalization;
+
+namespace ConsistencyHost.Isolation;
+
+/// <summary>
+/// The command line and environment a worker starts with: <c>prlimit</c> for resource limits, <c>unshare --net</c>
+/// for an empty network namespace, <c>setpriv</c> to drop to an unprivileged user, then <c>dotnet</c> with the worker; an environment of only what .NET needs.
+/// Each wrapper execs the next, so the worker is the host's direct child and inherits its standard input.
+/// </summary>
+internal static class WorkerCommand
+{
+    private const string Prlimit = "/usr/bin/prlimit";
+    private const string Unshare = "/usr/bin/unshare";
+
+    /// <summary>util-linux setpriv: drops to another user and sets no_new_privs before exec.</summary>
+    public const string Setpriv = "/usr/bin/setpriv";
+
+    public static ProcessStartInfo Build(IsolationOptions options, string pluginAssembly, string privateDirectory, string socketPath)
+    {
+        var start = new ProcessStartInfo
+        {
+            RedirectStandardInput = true,
+            RedirectStandardOutput = true,
+            RedirectStandardError = true,
+            UseShellExecute = false,
+            WorkingDirectory = privateDirectory,
+        };
+        var command = new List<string>();
+        if (File.Exists(Prlimit))
+        {
+            command.AddRange([Prlimit, $"--as={options.AddressSpaceBytes}", $"--nofile={options.OpenFiles}", "--core=0"]);
+        }
+
+        if (options.IsolateNetwork && NetworkNamespace.Arguments is { } unshare)
+        {
+            command.AddRange([Unshare, .. unshare]);
+        }
+
+        if (options.WorkerUserId is { } user)
+        {
+            command.AddRange([Setpriv, $"--reuid={user}", $"--regid={user}", "--clear-groups", "--no-new-privs"]);
+        }
+
+        command.AddRange([DotnetMuxer.Path, options.WorkerAssemblyPath, "--plugin", pluginAssembly, "--socket", socketPath]);
+        start.FileName = command[0];
+        foreach (var argument in command.Skip(1)) start.ArgumentList.Add(argument);
+        SetEnvironment(start, options, privateDirectory);
+        return start;
+    }
+
+    /// <summary>Nothing of the host's environment (API keys, connection strings) reaches the plugin.</summary>
+    private static void SetEnvironment(ProcessStartInfo start, IsolationOptions options, string privateDirectory)
+    {
+        var dotnetRoot = Environment.GetEnvironmentVariable("DOTNET_ROOT");
+        start.Environment.Clear();
+        start.Environment["PATH"] = "/usr/bin:/bin";
+        start.Environment["HOME"] = privateDirectory;
+        start.Environment["TMPDIR"] = privateDirectory;
+        if (!string.IsNullOrEmpty(dotnetRoot)) start.Environment["DOTNET_ROOT"] = dotnetRoot;
+        start.Environment["DOTNET_GCHeapHardLimit"] = options.ManagedHeapBytes.ToString("X", CultureInfo.InvariantCulture);
+        // No debugger, profiler or EventPipe endpoint: nothing else can attach to the worker through the runtime.
+        start.Environment["DOTNET_EnableDiagnostics"] = "0";
+        start.Environment["DOTNET_gcServer"] = "0";
+        start.Environment["DOTNET_NOLOGO"] = "1";
+    }
+}

@@ -1,0 +1,61 @@
+using System.Collections.Concurrent;
+using ConsistencyHost.Contract.Mapping;
+using ConsistencyHost.Engine.Intake;
+using ConsistencyHost.Engine.Plugins;
+using ConsistencyHost.Engine.Profiles;
+using ConsistencyHost.Engine.Running;
+
+namespace ConsistencyHost.Isolation;
+
+/// <summary>
+/// Runs untrusted rules in worker processes, one worker per plugin assembly, and quarantines a plugin whose
+/// workers keep dying. Disposing it kills every worker (workers also exit by themselves when the host's end
+/// of their standard input closes, which covers a host that is killed outright).
+/// </summary>
+public sealed class WorkerRuleExecutor : IRuleExecutor, IAsyncDisposable, IDisposable
+{
+    private readonly IsolationOptions _options;
+    private readonly CrashLedger _ledger;
+    private readonly ConcurrentDictionary<string, PluginWorker> _workers = new(StringComparer.Ordinal);
+
+    /// <summary>Creates the executor; workers start on first use.</summary>
+    public WorkerRuleExecutor(IsolationOptions? options = null)
+    {
+        _options = options ?? new IsolationOptions();
+        _ledger = new CrashLedger(_options);
+        if (!File.Exists(_options.WorkerAssemblyPath))
+        {
+            throw new FileNotFoundException($"the rule worker is not at '{_options.WorkerAssemblyPath}'; build src/ConsistencyHost.Worker", _options.WorkerAssemblyPath);
+        }
+    }
+
+    /// <summary>True when workers run without network (a fresh network namespace could be created here).</summary>
+    public bool NetworkIsolated => _options.IsolateNetwork && NetworkNamespace.Arguments is not null;
+
+    /// <inheritdoc />
+    public TimeSpan Overhead => _options.StartTimeout * 2 + _options.DeadlineGrace + TimeSpan.FromSeconds(15);
+
+    /// <inheritdoc />
+    public Task<ExecutorResult> RunAsync(ActiveRule rule, EntrySubmission submission, CancellationToken cancellationToken)
+    {
+        var worker = _workers.GetOrAdd(rule.Descriptor.AssemblyPath, path => new PluginWorker(path, _options, _ledger));
+        return worker.RunAsync(rule, RequestMapper.ToRequest(submission), cancellationToken);
+    }
+
+    /// <inheritdoc />
+    public string? HeldBackReason(RuleDescriptor rule) => _ledger.QuarantineReason(rule.AssemblyPath);
+
+    /// <inheritdoc />
+    public async ValueTask DisposeAsync()
+    {
+        foreach (var worker in _workers.Values)
+        {
+            await worker.DisposeAsync();
+        }
+
+        _workers.Clear();
+    }
+
+    /// <inheritdoc />
+    public void Dispose() => DisposeAsync().AsTask().GetAwaiter().GetResult();
+}

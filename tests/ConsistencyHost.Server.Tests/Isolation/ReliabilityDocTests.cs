@@ -1,0 +1,33 @@
+using System.Text;
+using System.Text.RegularExpressions;
+using ConsistencyHost.Engine.Profiles;
+using ConsistencyHost.Server.Hosting;
+using ConsistencyHost.Tests.Shared;
+using Microsoft.Extensions.Configuration;
+
+namespace ConsistencyHost.Server.Tests.Isolation;
+
+/// <summary>Every configuration snippet in docs/reliability.md is read by the host's own configuration readers.</summary>
+public sealed partial class ReliabilityDocTests
+{
+    [Fact]
+    public void ReliabilityDoc_JsonSnippets_AreValidHostConfiguration()
+    {
+        var doc = File.ReadAllText(Path.Combine(RepoPaths.Root, "docs", "reliability.md"));
+        var snippets = JsonBlock().Matches(doc).Select(m => m.Groups[1].Value).ToList();
+
+        Assert.Equal(2, snippets.Count);
+        foreach (var snippet in snippets)
+        {
+            using var stream = new MemoryStream(Encoding.UTF8.GetBytes(snippet));
+            var section = new ConfigurationBuilder().AddJsonStream(stream).Build().GetSection("ConsistencyHost");
+            var options = EngineConfiguration.Read(section, "plugins");
+            using var executor = IsolationConfiguration.CreateExecutor(section.GetSection("Isolation"));
+
+            Assert.NotEmpty(options.TrustedPlugins);
+        }
+    }
+
+    [GeneratedRegex("```json\\n(.*?)```", RegexOptions.Singleline)]
+    private static partial Regex JsonBlock();
+}
