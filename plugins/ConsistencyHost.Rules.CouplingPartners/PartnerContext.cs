@@ -38,8 +38,15 @@ internal sealed record PartnerContext(
     /// The structure's hydrogen classes in a signal (a class split by slow exchange appears once, under its
     /// source class).
     /// </summary>
-    public IReadOnlyList<int> StructureClassesOf(int signal) =>
-        [.. ClassesOf(signal).Select(c => Interpretation!.Classes[c].Source).Where(c => c >= 0).Distinct()];
+    public IReadOnlyList<int> StructureClassesOf(int signal)
+    {
+        // Built once per spectrum: partner look-ups ask for every signal's classes for every signal.
+        _structureClasses ??= [.. Enumerable.Range(0, Spectrum.Signals.Count)
+            .Select(s => (IReadOnlyList<int>)[.. ClassesOf(s).Select(c => Interpretation!.Classes[c].Source).Where(c => c >= 0).Distinct()])];
+        return _structureClasses[signal];
+    }
+
+    private IReadOnlyList<int>[]? _structureClasses;
 
     /// <summary>The compound signals holding a class that couples (2J, 3J, 4J) to a class of <paramref name="signal"/>.</summary>
     public IReadOnlyList<int>? PartnerSignals(int signal)
@@ -58,7 +65,9 @@ internal sealed record PartnerContext(
     /// (common practice), so limiting this to three bonds would raise false alarms.
     /// </summary>
     public bool MayCoupleToHeteronucleus() =>
-        Molecule is null || Molecule.Atoms.Any(a => a.AtomicNumber is 9 or 15);
+        _hasHeteronucleus ??= Molecule is null || Molecule.Atoms.Any(a => a.AtomicNumber is 9 or 15);
+
+    private bool? _hasHeteronucleus;
 
     private int IndexInCompound(int signal)
     {
