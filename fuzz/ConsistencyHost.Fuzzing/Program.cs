@@ -1,4 +1,3 @@
-using System.Text;
 using ConsistencyHost.Fuzzing;
 using SharpFuzz;
 
@@ -16,12 +15,5 @@ if (args.Length > 1 && args[1] == "--replay")
 }
 
 // Out of process: a stack overflow or a fatal error in the reader is reported to AFL as a crash too.
-Fuzzer.OutOfProcess.Run(stream => harness(Decode(stream)));
+Fuzzer.OutOfProcess.Run(stream => harness(InputText.Decode(stream)));
 return 0;
-
-static string Decode(Stream stream)
-{
-    // Invalid UTF-8 becomes U+FFFD, which is what a reader gets from any text API as well.
-    using var reader = new StreamReader(stream, new UTF8Encoding(false, false), detectEncodingFromByteOrderMarks: false);
-    return reader.ReadToEnd();
-}

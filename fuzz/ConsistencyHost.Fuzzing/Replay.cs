@@ -13,7 +13,7 @@ internal static class Replay
         var failures = 0;
         foreach (var file in paths.SelectMany(Files))
         {
-            var text = File.ReadAllText(file);
+            var text = InputText.Decode(File.ReadAllBytes(file));
             var task = Task.Run(() => harness(text));
             var clock = Stopwatch.StartNew();
             try
