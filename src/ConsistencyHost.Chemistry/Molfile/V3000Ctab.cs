@@ -103,7 +103,7 @@ internal static class V3000Ctab
 
         var ia = ids.TryGetValue(a, out var pa) ? pa + 1 : -1;
         var ib = ids.TryGetValue(b, out var pb) ? pb + 1 : -1;
-        if (!MolfileBondCheck.Valid(lines, i, ia < 0 ? a + table.Atoms.Count + 1 : ia, ib < 0 ? b + table.Atoms.Count + 1 : ib, type, table.Atoms.Count))
+        if (!MolfileBondCheck.Valid(lines, i, ia < 0 ? a + table.Atoms.Count + 1 : ia, ib < 0 ? b + table.Atoms.Count + 1 : ib, type, table))
         {
             return;
         }

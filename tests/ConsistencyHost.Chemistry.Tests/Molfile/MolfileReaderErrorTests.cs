@@ -24,6 +24,19 @@ public sealed class MolfileReaderErrorTests
         { Header + "  0  0  0  0  0  0  0  0  0  0999 V3000\nM  V30 BEGIN CTAB\nM  V30 BEGIN ATOM\nM  V30 1 C zero 0 0 0\nM  V30 END ATOM\nM  V30 END CTAB\nM  END\n", MolfileMessages.Format(MolfileMessages.BadV3000Line, "expected 'index type x y z aamap' for an atom"), 7, 1 },
     };
 
+    [Fact]
+    public void Read_TwoBondLinesForOneAtomPair_ReportsDuplicateBondAtTheSecondLine()
+    {
+        // Found by fuzzing (fuzz/run.sh molfile): a repeated pair was read as a multigraph, which the SMILES
+        // writer then wrote as a ring bond duplicating a chain bond. Source: CTfile formats (BIOVIA), V2000 bond
+        // block: one line per bond between two atoms; the SMILES reader rejects the same duplicate (OpenSMILES, ring bonds).
+        var text = Header + "  2  2  0  0  0  0  0  0  0  0999 V2000\n" + AtomC + AtomCl + "  1  2  1  0\n  2  1  1  0\nM  END\n";
+        var result = MolfileReader.Read(text);
+        Assert.Null(result.Value);
+        var problem = Assert.Single(result.Problems);
+        Assert.Equal((ProblemSeverity.Error, MolfileMessages.Format(MolfileMessages.DuplicateBond, 1, 2, 7), 8, 1), (problem.Severity, problem.Message, problem.Line, problem.Column));
+    }
+
     [Theory]
     [MemberData(nameof(Rows))]
     public void Read_MalformedMolfile_ReportsMessageAtLineAndColumn(string text, string message, int line, int column)
