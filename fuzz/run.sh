@@ -16,8 +16,11 @@ rm -rf "$findings" && mkdir -p "$out/findings"
 # SharpFuzz targets are not AFL-compiled binaries, and core dumps are not routed to a file here.
 export AFL_SKIP_BIN_CHECK=1 AFL_NO_UI=1 AFL_SKIP_CPUFREQ=1 AFL_I_DONT_CARE_ABOUT_MISSING_CRASHES=1 AFL_NO_AFFINITY=1
 # 5 s per input: far above any reader's time on these small inputs, well below "never returns".
+# No core files (a .NET core is hundreds of MB, and AFL saves the input anyway); only the log's tail is kept.
+ulimit -c 0
 afl-fuzz -i "$root/fuzz/corpus/$reader" -o "$findings" -x "$root/fuzz/dict/$reader.dict" -t 5000 -m none -V "$seconds" \
-  -- "$(command -v dotnet)" "$out/bin/ConsistencyHost.Fuzzing.dll" "$reader" > "$out/afl-$reader.log" 2>&1 || {
+  -- "$(command -v dotnet)" "$out/bin/ConsistencyHost.Fuzzing.dll" "$reader" 2>&1 | tail -n 200 > "$out/afl-$reader.log"
+[ "${PIPESTATUS[0]}" = 0 ] || {
   echo "afl-fuzz failed for $reader; last lines of $out/afl-$reader.log:" >&2; tail -20 "$out/afl-$reader.log" >&2; exit 2; }
 
 stat() { awk -F' *: *' -v k="$1" '$1 == k { print $2 }' "$findings/default/fuzzer_stats"; }
