@@ -126,5 +126,5 @@ internal static class V3000Ctab
     }
 
     private static bool TryReal(string s, out double value) =>
-        double.TryParse(s, NumberStyles.Float, CultureInfo.InvariantCulture, out value);
+        double.TryParse(s, NumberStyles.Float, CultureInfo.InvariantCulture, out value) && double.IsFinite(value);
 }

@@ -17,6 +17,8 @@ public sealed class MolfileReaderErrorTests
         { Header + "  1  0  0  0  0  0  0  0  0  0999 V4000\nM  END\n", MolfileMessages.Format(MolfileMessages.UnknownVersion, "V4000"), 4, 34 },
         { Header + "  1  0  0  0  0  0  0  0  0  0999 V2000\n    0.0000    0.0000    0.0000 Xx  0  0\nM  END\n", MolfileMessages.Format(MolfileMessages.UnknownElement, "Xx"), 5, 32 },
         { Header + "  1  0  0  0  0  0  0  0  0  0999 V2000\n    0.0x00    0.0000    0.0000 C   0  0\nM  END\n", MolfileMessages.Format(MolfileMessages.BadNumber, "x", "0.0x00"), 5, 1 },
+        // Found by fuzzing (fuzz/run.sh sdf): an overflowing exponent was read as an infinite coordinate.
+        { Header + "  1  0  0  0  0  0  0  0  0  0999 V2000\n    0.0000   1E3372    0.0000 C   0  0\nM  END\n", MolfileMessages.Format(MolfileMessages.BadNumber, "y", "1E3372"), 5, 11 },
         { Header + "  2  1  0  0  0  0  0  0  0  0999 V2000\n" + AtomC + AtomCl + "  1  9  1  0\nM  END\n", MolfileMessages.Format(MolfileMessages.BadAtomReference, 9, 2), 7, 1 },
         { Header + "  2  1  0  0  0  0  0  0  0  0999 V2000\n" + AtomC + AtomCl + "  1  1  1  0\nM  END\n", MolfileMessages.Format(MolfileMessages.SelfBond, 1), 7, 1 },
         { Header + "  3  0  0  0  0  0  0  0  0  0999 V2000\n" + AtomC + AtomCl, MolfileMessages.Format(MolfileMessages.MissingAtomLine, 3, 3), 6, 1 },
