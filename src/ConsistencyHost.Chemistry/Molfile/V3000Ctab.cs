@@ -83,9 +83,9 @@ internal static class V3000Ctab
             lines.Error(i, 1, MolfileMessages.Format(MolfileMessages.UnknownElement, f[1]));
         }
 
-        var charge = Property(f, "CHG=");
+        var charge = MolfileAtomCheck.Charge(lines, i, 1, Property(f, "CHG="));
         var radical = Property(f, "RAD=");
-        var isotope = f[1] switch { "D" => 2, "T" => 3, _ => Property(f, "MASS=") };
+        var isotope = f[1] switch { "D" => 2, "T" => 3, _ => MolfileAtomCheck.MassNumber(lines, i, 1, Property(f, "MASS=")) };
         ids[id] = table.Atoms.Count;
         table.Atoms.Add(new MolfileAtom(f[1], element?.AtomicNumber ?? 0, x, y, z, charge,
             isotope, radical == 2 ? 1 : radical is 1 or 3 ? 2 : 0, lines.LineNumber(i)));

@@ -19,6 +19,10 @@ public sealed class MolfileReaderErrorTests
         { Header + "  1  0  0  0  0  0  0  0  0  0999 V2000\n    0.0x00    0.0000    0.0000 C   0  0\nM  END\n", MolfileMessages.Format(MolfileMessages.BadNumber, "x", "0.0x00"), 5, 1 },
         // Found by fuzzing (fuzz/run.sh sdf): an overflowing exponent was read as an infinite coordinate.
         { Header + "  1  0  0  0  0  0  0  0  0  0999 V2000\n    0.0000   1E3372    0.0000 C   0  0\nM  END\n", MolfileMessages.Format(MolfileMessages.BadNumber, "y", "1E3372"), 5, 11 },
+        // Found by fuzzing (fuzz/run-all-short.sh, sdf): MASS=229300090 was kept and written as a SMILES isotope
+        // that no reader takes. Source: CTfile formats (BIOVIA): M  CHG takes -15 to +15 (from memory).
+        { Header + "  0  0  0  0  0  0  0  0  0  0999 V3000\nM  V30 BEGIN CTAB\nM  V30 COUNTS 1 0 0 0 0\nM  V30 BEGIN ATOM\nM  V30 1 C 0 0 0 0 MASS=229300090\nM  V30 END ATOM\nM  V30 END CTAB\nM  END\n", MolfileMessages.Format(MolfileMessages.BadMassNumber, 229300090), 8, 1 },
+        { Header + "  1  0  0  0  0  0  0  0  0  0999 V2000\n" + AtomC + "M  CHG  1   1  16\nM  END\n", MolfileMessages.Format(MolfileMessages.BadCharge, 16), 6, 14 },
         { Header + "  2  1  0  0  0  0  0  0  0  0999 V2000\n" + AtomC + AtomCl + "  1  9  1  0\nM  END\n", MolfileMessages.Format(MolfileMessages.BadAtomReference, 9, 2), 7, 1 },
         { Header + "  2  1  0  0  0  0  0  0  0  0999 V2000\n" + AtomC + AtomCl + "  1  1  1  0\nM  END\n", MolfileMessages.Format(MolfileMessages.SelfBond, 1), 7, 1 },
         { Header + "  3  0  0  0  0  0  0  0  0  0999 V2000\n" + AtomC + AtomCl, MolfileMessages.Format(MolfileMessages.MissingAtomLine, 3, 3), 6, 1 },
