@@ -103,7 +103,14 @@ internal static class V3000Ctab
 
         var ia = ids.TryGetValue(a, out var pa) ? pa + 1 : -1;
         var ib = ids.TryGetValue(b, out var pb) ? pb + 1 : -1;
-        if (!MolfileBondCheck.Valid(lines, i, ia < 0 ? a + table.Atoms.Count + 1 : ia, ib < 0 ? b + table.Atoms.Count + 1 : ib, type, table))
+        // An id no atom line declared is reported as written (a shifted stand-in for it could land in range).
+        if (ia < 0 || ib < 0)
+        {
+            lines.Error(i, 1, MolfileMessages.Format(MolfileMessages.BadAtomReference, ia < 0 ? a : b, table.Atoms.Count));
+            return;
+        }
+
+        if (!MolfileBondCheck.Valid(lines, i, ia, ib, type, table))
         {
             return;
         }

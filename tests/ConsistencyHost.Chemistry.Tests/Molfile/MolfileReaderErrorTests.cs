@@ -22,6 +22,9 @@ public sealed class MolfileReaderErrorTests
         // Found by fuzzing (fuzz/run-all-short.sh, sdf): MASS=229300090 was kept and written as a SMILES isotope
         // that no reader takes. Source: CTfile formats (BIOVIA): M  CHG takes -15 to +15 (from memory).
         { Header + "  0  0  0  0  0  0  0  0  0  0999 V3000\nM  V30 BEGIN CTAB\nM  V30 COUNTS 1 0 0 0 0\nM  V30 BEGIN ATOM\nM  V30 1 C 0 0 0 0 MASS=229300090\nM  V30 END ATOM\nM  V30 END CTAB\nM  END\n", MolfileMessages.Format(MolfileMessages.BadMassNumber, 229300090), 8, 1 },
+        // Found by fuzzing (fuzz/run.sh molfile): an undeclared negative atom id was shifted into range and
+        // the bond indexed atom -2. Source: CTfile formats (BIOVIA), V3000 bond line 'index type atom1 atom2'.
+        { Header + "  0  0  0  0  0  0  0  0  0  0999 V3000\nM  V30 BEGIN CTAB\nM  V30 COUNTS 2 1 0 0 0\nM  V30 BEGIN ATOM\nM  V30 1 C 0 0 0 0\nM  V30 2 C 1.5 0 0 0\nM  V30 END ATOM\nM  V30 BEGIN BOND\nM  V30 1 1 1 -1\nM  V30 END BOND\nM  V30 END CTAB\nM  END\n", MolfileMessages.Format(MolfileMessages.BadAtomReference, -1, 2), 12, 1 },
         { Header + "  1  0  0  0  0  0  0  0  0  0999 V2000\n" + AtomC + "M  CHG  1   1  16\nM  END\n", MolfileMessages.Format(MolfileMessages.BadCharge, 16), 6, 14 },
         { Header + "  2  1  0  0  0  0  0  0  0  0999 V2000\n" + AtomC + AtomCl + "  1  9  1  0\nM  END\n", MolfileMessages.Format(MolfileMessages.BadAtomReference, 9, 2), 7, 1 },
         { Header + "  2  1  0  0  0  0  0  0  0  0999 V2000\n" + AtomC + AtomCl + "  1  1  1  0\nM  END\n", MolfileMessages.Format(MolfileMessages.SelfBond, 1), 7, 1 },
