@@ -49,7 +49,8 @@ internal sealed class MolfileLines
     public double Real(int index, int start, int width, string what)
     {
         var text = Field(lines[index], start, width);
-        if (double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out var value))
+        // "NaN", "Infinity" and overflowing exponents parse, but are no coordinate.
+        if (double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out var value) && double.IsFinite(value))
         {
             return value;
         }

@@ -14,6 +14,9 @@ public static class MolfileMessages
     public const string UnknownElement = "Unknown element symbol '{0}'.";
     public const string BadAtomReference = "Bond refers to atom {0}, but there are {1} atoms.";
     public const string SelfBond = "Bond joins atom {0} to itself.";
+    public const string BadCharge = "Charge {0} is outside -15 to +15, the range the CTfile format allows.";
+    public const string BadMassNumber = "Mass number {0} is outside 1 to 999; expected an isotope's mass number.";
+    public const string DuplicateBond = "Bond joins atoms {0} and {1}, already joined by the bond on line {2}; expected one bond per atom pair.";
     public const string UnsupportedBondType = "Bond type {0} is not supported (1, 2, 3 or 4 aromatic); read as single.";
     public const string BadPropertyLine = "Property line '{0}' is malformed: expected a count and that many atom/value pairs.";
     public const string MissingEnd = "No 'M  END' line; expected the connection table to end with it.";

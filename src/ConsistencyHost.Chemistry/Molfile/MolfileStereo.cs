@@ -95,7 +95,8 @@ internal static class MolfileStereo
         var e = table.Atoms[b.End];
         var sa = Cross(e.X - a.X, e.Y - a.Y, table.Atoms[ra].X - a.X, table.Atoms[ra].Y - a.Y);
         var sb = Cross(e.X - a.X, e.Y - a.Y, table.Atoms[rb].X - a.X, table.Atoms[rb].Y - a.Y);
-        if (Math.Abs(sa) < 1e-4 || Math.Abs(sb) < 1e-4)
+        // Finite but huge coordinates can overflow to NaN, which has no side (and Math.Sign throws on it).
+        if (!(Math.Abs(sa) >= 1e-4) || !(Math.Abs(sb) >= 1e-4))
         {
             return null;
         }

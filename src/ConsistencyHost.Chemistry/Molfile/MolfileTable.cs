@@ -16,4 +16,7 @@ internal sealed class MolfileTable
 {
     public List<MolfileAtom> Atoms { get; } = [];
     public List<MolfileBond> Bonds { get; } = [];
+
+    /// <summary>Atom pairs (lower index first) already joined, with the 1-based line of that bond.</summary>
+    public Dictionary<(int Low, int High), int> JoinedPairs { get; } = [];
 }

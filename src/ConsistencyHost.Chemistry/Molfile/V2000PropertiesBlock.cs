@@ -66,10 +66,10 @@ internal static class V2000PropertiesBlock
             switch (tag)
             {
                 case "M  CHG":
-                    a.Charge = value;
+                    a.Charge = MolfileAtomCheck.Charge(lines, i, 14 + (k * 8), value);
                     break;
                 case "M  ISO":
-                    a.Isotope = value;
+                    a.Isotope = MolfileAtomCheck.MassNumber(lines, i, 14 + (k * 8), value);
                     break;
                 default:
                     a.Radical = value == 2 ? 1 : value is 1 or 3 ? 2 : 0;

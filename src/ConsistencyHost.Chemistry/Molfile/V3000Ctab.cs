@@ -83,9 +83,9 @@ internal static class V3000Ctab
             lines.Error(i, 1, MolfileMessages.Format(MolfileMessages.UnknownElement, f[1]));
         }
 
-        var charge = Property(f, "CHG=");
+        var charge = MolfileAtomCheck.Charge(lines, i, 1, Property(f, "CHG="));
         var radical = Property(f, "RAD=");
-        var isotope = f[1] switch { "D" => 2, "T" => 3, _ => Property(f, "MASS=") };
+        var isotope = f[1] switch { "D" => 2, "T" => 3, _ => MolfileAtomCheck.MassNumber(lines, i, 1, Property(f, "MASS=")) };
         ids[id] = table.Atoms.Count;
         table.Atoms.Add(new MolfileAtom(f[1], element?.AtomicNumber ?? 0, x, y, z, charge,
             isotope, radical == 2 ? 1 : radical is 1 or 3 ? 2 : 0, lines.LineNumber(i)));
@@ -103,7 +103,14 @@ internal static class V3000Ctab
 
         var ia = ids.TryGetValue(a, out var pa) ? pa + 1 : -1;
         var ib = ids.TryGetValue(b, out var pb) ? pb + 1 : -1;
-        if (!MolfileBondCheck.Valid(lines, i, ia < 0 ? a + table.Atoms.Count + 1 : ia, ib < 0 ? b + table.Atoms.Count + 1 : ib, type, table.Atoms.Count))
+        // An id no atom line declared is reported as written (a shifted stand-in for it could land in range).
+        if (ia < 0 || ib < 0)
+        {
+            lines.Error(i, 1, MolfileMessages.Format(MolfileMessages.BadAtomReference, ia < 0 ? a : b, table.Atoms.Count));
+            return;
+        }
+
+        if (!MolfileBondCheck.Valid(lines, i, ia, ib, type, table))
         {
             return;
         }
@@ -126,5 +133,5 @@ internal static class V3000Ctab
     }
 
     private static bool TryReal(string s, out double value) =>
-        double.TryParse(s, NumberStyles.Float, CultureInfo.InvariantCulture, out value);
+        double.TryParse(s, NumberStyles.Float, CultureInfo.InvariantCulture, out value) && double.IsFinite(value);
 }

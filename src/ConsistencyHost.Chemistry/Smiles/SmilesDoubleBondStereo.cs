@@ -6,7 +6,10 @@ namespace ConsistencyHost.Chemistry.Smiles;
 /// <summary>Derives cis/trans descriptors from '/' and '\' marks around double bonds (OpenSMILES §3.7).</summary>
 internal static class SmilesDoubleBondStereo
 {
-    public static Molecule Add(Molecule m, List<ReadProblem> problems)
+    /// <param name="m">The molecule as written, before hydrogens are folded.</param>
+    /// <param name="problems">Where conflicting marks are reported.</param>
+    /// <param name="atomOffsets">Character offset of each atom in the SMILES, so a problem points into the text.</param>
+    public static Molecule Add(Molecule m, List<ReadProblem> problems, IReadOnlyList<int> atomOffsets)
     {
         var found = new List<DoubleBondStereo>();
         for (var i = 0; i < m.Bonds.Length; i++)
@@ -17,8 +20,8 @@ internal static class SmilesDoubleBondStereo
                 continue;
             }
 
-            var begin = Reference(m, bond.Begin, bond.End, problems);
-            var end = Reference(m, bond.End, bond.Begin, problems);
+            var begin = Reference(m, bond.Begin, bond.End, problems, atomOffsets);
+            var end = Reference(m, bond.End, bond.Begin, problems, atomOffsets);
             if (begin.Atom >= 0 && end.Atom >= 0)
             {
                 var config = begin.Side == end.Side ? DoubleBondConfiguration.Cis : DoubleBondConfiguration.Trans;
@@ -41,7 +44,7 @@ internal static class SmilesDoubleBondStereo
     }
 
     /// <summary>The first marked neighbour of <paramref name="atom"/> and its side: +1 above, -1 below.</summary>
-    private static (int Atom, int Side) Reference(Molecule m, int atom, int across, List<ReadProblem> problems)
+    private static (int Atom, int Side) Reference(Molecule m, int atom, int across, List<ReadProblem> problems, IReadOnlyList<int> atomOffsets)
     {
         var result = (Atom: -1, Side: 0);
         var neighbours = m.Neighbours(atom);
@@ -64,7 +67,7 @@ internal static class SmilesDoubleBondStereo
             else if (result.Side == side)
             {
                 problems.Add(new ReadProblem(ProblemSeverity.Warning,
-                    SmilesMessages.Format(SmilesMessages.ConflictingDoubleBondMarks, atom), AtomIndex: atom));
+                    SmilesMessages.Format(SmilesMessages.ConflictingDoubleBondMarks, atom), atomOffsets[atom], AtomIndex: atom));
                 return (-1, 0);
             }
         }

@@ -41,7 +41,7 @@ internal sealed class SmilesGraphCompleter
 
         AddTetrahedral(builder);
         var molecule = builder.Build();
-        return SmilesDoubleBondStereo.Add(molecule, problems);
+        return SmilesDoubleBondStereo.Add(molecule, problems, [.. parsed.Atoms.Select(a => a.Offset)]);
     }
 
     private void AssignWrittenOrders()

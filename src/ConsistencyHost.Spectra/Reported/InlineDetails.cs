@@ -37,6 +37,8 @@ internal static class InlineDetails
         var end = ItemEnd(c.Text, start);
         if (end <= start) return null;
         var text = c.Text[start..end].TrimEnd();
+        // TrimEnd also drops whitespace that IsSpace does not skip (form feed, vertical tab): nothing may be left.
+        if (text.Length == 0) return null;
         var probe = new TextCursor(c.Text) { Pos = start };
         if (HeaderReader.IsAt(probe) || HrmsReader.IsAt(probe)) return null;
         var head = text.IndexOf('(') is var open and > 0 ? text[..open].TrimEnd() : text;

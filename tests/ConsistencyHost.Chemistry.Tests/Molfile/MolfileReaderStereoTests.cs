@@ -167,4 +167,30 @@ public sealed class MolfileReaderStereoTests
         var d = Assert.Single(m.DoubleBondStereo, x => x.Bond == bond);
         Assert.Equal(expected, StereoAssert.ConfigurationFor(m, d, beginRef, endRef));
     }
+
+    [Fact]
+    public void Read_DoubleBondWithOverflowingCoordinates_GivesNoConfigurationInsteadOfThrowing()
+    {
+        // Found by fuzzing (fuzz/run.sh sdf): finite coordinates near 1E200 overflow the side test to NaN, and
+        // Math.Sign(NaN) threw. FC=CF drawn that way has no readable side, so no cis/trans is assigned.
+        // Source: CTfile formats (BIOVIA), V2000 atom and bond block layout.
+        const string text = """
+            FC=CF
+
+            
+              4  3  0  0  0  0  0  0  0  0999 V2000
+                 1E200     2E200    0.0000 F   0  0  0  0  0  0  0  0  0  0  0  0
+                0.0000    0.0000    0.0000 C   0  0  0  0  0  0  0  0  0  0  0  0
+                 1E200     1E200    0.0000 C   0  0  0  0  0  0  0  0  0  0  0  0
+                 2E200     1E200    0.0000 F   0  0  0  0  0  0  0  0  0  0  0  0
+              1  2  1  0
+              2  3  2  0
+              3  4  1  0
+            M  END
+            """;
+        var result = MolfileReader.Read(text);
+        Assert.True(result.Succeeded, string.Join("; ", result.Problems.Select(p => p.Message)));
+        Assert.Equal(4, result.Value!.AtomCount);
+        Assert.Empty(result.Value.DoubleBondStereo);
+    }
 }

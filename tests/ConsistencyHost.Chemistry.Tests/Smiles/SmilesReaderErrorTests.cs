@@ -55,4 +55,17 @@ public sealed class SmilesReaderErrorTests
         Assert.Empty(result.Value!.TetrahedralStereo);
         Assert.Contains(result.Problems, p => p.Message == SmilesMessages.Format(SmilesMessages.ChiralityIgnored, 0, 4));
     }
+
+    [Fact]
+    public void Read_ConflictingDoubleBondMarks_WarningCarriesTheAtomOffset()
+    {
+        // Found by fuzzing (fuzz/run.sh smiles): the warning had an atom index but offset -1.
+        // Source: OpenSMILES specification §3.7: '/' and '\' on two substituents of one double-bond atom
+        // that put both on the same side are contradictory.
+        var result = SmilesReader.Read(@"F/C(\F)=C/F");
+        var problem = Assert.Single(result.Problems, p => p.Message == SmilesMessages.Format(SmilesMessages.ConflictingDoubleBondMarks, 1));
+        Assert.Equal(ProblemSeverity.Warning, problem.Severity);
+        Assert.Equal(2, problem.Offset);
+        Assert.Equal(1, problem.AtomIndex);
+    }
 }

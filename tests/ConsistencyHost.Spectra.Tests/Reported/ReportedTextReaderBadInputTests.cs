@@ -99,6 +99,18 @@ public sealed class ReportedTextReaderBadInputTests
     }
 
     [Fact]
+    public void Read_InlineItemEmptiedByTrimming_ReportsTheItemInsteadOfThrowing()
+    {
+        // Found by fuzzing (fuzz/run.sh reported): a form feed alone between the commas of a table-cell signal
+        // ("1.65, m, 2H", source: PMC4199947 table Tab2) was trimmed to an empty item and threw IndexOutOfRangeException.
+        var result = ReportedTextReader.Read(H + "1.65, m, \f, 2H.");
+        Assert.False(result.Succeeded);
+        Assert.Empty(result.Spectra);
+        var first = result.Problems[0];
+        Assert.Equal((35, "\f, 2H.", M.ExpectedShift), (first.Offset, first.Fragment, first.Expected));
+    }
+
+    [Fact]
     public void Read_DefaultLimits_AreTheDocumentedOnes()
     {
         Assert.Equal(200_000, ReportedTextOptions.Default.MaxTextLength);
