@@ -125,6 +125,11 @@ public sealed class EntryIntake(IntakeLimits limits)
                 throw new EntryInputException(StructureField(structure), "is empty; expected a structure");
             }
 
+            if (structure.Format == StructureFormat.Smiles && structure.Text.Length > limits.MaxSmilesLength)
+            {
+                throw new EntryInputException(StructureField(structure), $"is {structure.Text.Length} characters; the limit for a SMILES is {limits.MaxSmilesLength}");
+            }
+
             if (structure.Text.Length > limits.MaxStructureLength)
             {
                 throw new EntryInputException(StructureField(structure), $"is {structure.Text.Length} characters; the limit is {limits.MaxStructureLength}");

@@ -50,6 +50,20 @@ public sealed class LimitTests
     }
 
     [Fact]
+    public async Task CheckEntry_SmilesAboveLengthLimit_IsRefusedBeforeReading()
+    {
+        await using var host = await RunningHost.StartAsync(["ConsistencyHost.Rules.SpectrumMetadata"]);
+        var client = new EntryCheck.EntryCheckClient(host.Channel);
+        var request = Requests.Complete("L-3");
+        request.Structure = new Structure { Smiles = new string('C', 100_000) };
+
+        var error = await Assert.ThrowsAsync<RpcException>(() => client.CheckEntryAsync(request, deadline: DateTime.UtcNow + CallTimeout).ResponseAsync);
+
+        Assert.Equal(StatusCode.InvalidArgument, error.StatusCode);
+        Assert.Equal("structure.smiles: is 100000 characters; the limit for a SMILES is 5000", error.Status.Detail);
+    }
+
+    [Fact]
     public async Task CheckEntry_RequestAboveMessageLimit_IsResourceExhausted()
     {
         await using var host = await RunningHost.StartAsync(["ConsistencyHost.Rules.SpectrumMetadata"]);
