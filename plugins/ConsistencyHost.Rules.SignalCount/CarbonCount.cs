@@ -41,7 +41,7 @@ internal static class CarbonCount
     private static List<int> CountedLines(Spectrum spectrum, int max)
     {
         var lines = Enumerable.Range(0, spectrum.Signals.Count)
-            .Where(i => !spectrum.Signals[i].Notes.Any(n => n.Contains("minor", StringComparison.OrdinalIgnoreCase)))
+            .Where(i => !spectrum.Signals[i].IsMinorSpecies())
             .ToList();
         if (lines.Count <= max) return lines;
         var solvent = new ResidualMatcher().Match(spectrum).Matches

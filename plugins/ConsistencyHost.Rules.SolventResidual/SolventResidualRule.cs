@@ -98,7 +98,7 @@ public sealed class SolventResidualRule : Rule<SolventResidualOptions>
     private static IEnumerable<Finding> CarbonFindings(IEntryView entry, Spectrum spectrum, int index)
     {
         if (entry.Perception is not { } perception) yield break;
-        var counted = spectrum.Signals.Count(s => !s.Notes.Any(n => n.Contains("minor", StringComparison.OrdinalIgnoreCase)));
+        var counted = spectrum.Signals.Count(s => !s.IsMinorSpecies());
         if (counted <= ExpectedSignals.Carbon(perception.Equivalence).Max) yield break;
         foreach (var match in new ResidualMatcher().Match(spectrum).Matches.Where(m => m.Kind == ResidualMatchKind.ResidualSolvent))
         {

@@ -10,7 +10,7 @@ internal static class CliProcess
     {
         get
         {
-            var configuration = new DirectoryInfo(AppContext.BaseDirectory.TrimEnd(Path.DirectorySeparatorChar)).Parent!.Name;
+            var configuration = RepoPaths.Configuration;
             return Path.Combine(RepoPaths.Root, "src", "ConsistencyHost.Cli", "bin", configuration, "net10.0");
         }
     }

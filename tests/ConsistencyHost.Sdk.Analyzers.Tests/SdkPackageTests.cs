@@ -9,7 +9,7 @@ public sealed class SdkPackageTests
     [Fact]
     public async Task Pack_Sdk_ContainsAnalyzersAndCodeFixesUnderAnalyzersFolder()
     {
-        var configuration = new DirectoryInfo(AppContext.BaseDirectory.TrimEnd(Path.DirectorySeparatorChar)).Parent!.Name;
+        var configuration = RepoPaths.Configuration;
         var output = Path.Combine(Path.GetTempPath(), $"ch-pack-{Guid.NewGuid():N}");
         try
         {

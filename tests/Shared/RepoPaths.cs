@@ -16,6 +16,10 @@ internal static class RepoPaths
 
     public static string Samples => Path.Combine(Root, "samples");
 
+    /// <summary>The build configuration the tests run in (Debug or Release), read from their output folder.</summary>
+    public static string Configuration { get; } =
+        new DirectoryInfo(AppContext.BaseDirectory.TrimEnd(Path.DirectorySeparatorChar)).Parent!.Name;
+
     private static string FindRoot()
     {
         var directory = new DirectoryInfo(AppContext.BaseDirectory);

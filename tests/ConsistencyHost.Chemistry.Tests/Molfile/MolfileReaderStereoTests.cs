@@ -28,7 +28,7 @@ public sealed class MolfileReaderStereoTests
         """;
 
     // Source: RDKit MolToMolBlock of N[C@@H](C)C(=O)O.
-    private const string Alanine = """
+    internal const string Alanine = """
 
              RDKit          2D
 

@@ -20,7 +20,7 @@ public static class ProtonInterpreter
         var fast = ClassInputs.From(equivalence);
         var splits = AmideRotation.Splits(molecule, equivalence).Hydrogen;
         var residuals = new ResidualMatcher(matchOptions).Match(spectrum);
-        var minor = spectrum.Signals.Select(IsMinorSpecies).ToArray();
+        var minor = spectrum.Signals.Select(s => s.IsMinorSpecies()).ToArray();
         var candidates = Candidates(residuals, spectrum.Signals, molecule, minor);
         var (counts, fit) = ProtonCounts(spectrum.Signals, minor, fast);
         var best = Choose(spectrum.Signals, counts, minor, candidates, fast);
@@ -54,8 +54,6 @@ public static class ProtonInterpreter
         };
     }
 
-    private static bool IsMinorSpecies(Signal signal) =>
-        signal.Notes.Any(n => n.Contains("minor", StringComparison.OrdinalIgnoreCase));
 
     /// <summary>Signals that may not be the compound's, each with the role it would have.</summary>
     private static Dictionary<int, SignalRole> Candidates(ResidualMatchResult residuals, IReadOnlyList<Signal> signals, Molecule molecule, bool[] minor)

@@ -46,24 +46,7 @@ public sealed class EnvironmentReportTests
     public void Describe_MolfileAndSmiles_GiveTheSameReport()
     {
         // Same compound (L-alanine) from two readers; the molfile is RDKit's MolToMolBlock of N[C@@H](C)C(=O)O.
-        const string molfile = """
-
-                 RDKit          2D
-
-              6  5  0  0  0  0  0  0  0  0999 V2000
-                1.5000   -1.2990    0.0000 N   0  0  0  0  0  0  0  0  0  0  0  0
-                0.7500    0.0000    0.0000 C   0  0  0  0  0  0  0  0  0  0  0  0
-                1.5000    1.2990    0.0000 C   0  0  0  0  0  0  0  0  0  0  0  0
-               -0.7500   -0.0000    0.0000 C   0  0  0  0  0  0  0  0  0  0  0  0
-               -1.5000    1.2990    0.0000 O   0  0  0  0  0  0  0  0  0  0  0  0
-               -1.5000   -1.2990    0.0000 O   0  0  0  0  0  0  0  0  0  0  0  0
-              1  2  1  0
-              2  3  1  6
-              2  4  1  0
-              4  5  2  0
-              4  6  1  0
-            M  END
-            """;
+        var molfile = ConsistencyHost.Chemistry.Tests.Molfile.MolfileReaderStereoTests.Alanine;
         var a = EnvironmentReport.Describe(ConsistencyHost.Chemistry.Molfile.MolfileReader.Read(molfile).Value!);
         var b = EnvironmentReport.Describe(SmilesReader.Read("N[C@@H](C)C(=O)O").Value!);
         Assert.Equal(System.Text.Json.JsonSerializer.Serialize(b), System.Text.Json.JsonSerializer.Serialize(a));
