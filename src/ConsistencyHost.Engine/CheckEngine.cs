@@ -54,6 +54,11 @@ public sealed class CheckEngine
     {
         var profile = ResolveProfile(submission.Profile);
         var entry = _intake.Build(submission);
+        if (profile.Rules.Any(rule => !_runner.RunsIsolated(rule)))
+        {
+            SharedPerception.Prepare(entry);
+        }
+
         var (findings, runs) = _runner.Run(entry, submission, profile, cancellationToken);
         return new CheckReport
         {

@@ -25,6 +25,9 @@ namespace ConsistencyHost.Engine.Running;
 /// </remarks>
 public sealed class RuleRunner(IRuleExecutor? isolated = null)
 {
+    /// <summary>How long an in-process rule may wait for a pool thread before the request gives up on it.</summary>
+    private static readonly TimeSpan StartAllowance = TimeSpan.FromSeconds(10);
+
     private readonly ConcurrentDictionary<string, Task> _runaways = new(StringComparer.Ordinal);
 
     /// <summary>True when the rule goes to the worker executor rather than the thread pool.</summary>
@@ -68,23 +71,33 @@ public sealed class RuleRunner(IRuleExecutor? isolated = null)
         }
 
         var deadline = CancellationTokenSource.CreateLinkedTokenSource(cancellationToken);
-        deadline.CancelAfter(rule.Deadline);
-        var clock = Stopwatch.StartNew();
+        var clock = new Stopwatch();
+        var began = new ManualResetEventSlim();
         // Take the token now: the source is disposed after the wait, possibly before a queued task starts.
         var token = deadline.Token;
-        // The clock stops when the rule returns, so a rule awaited after a slow one reports its own time.
+        // The deadline and the clock start when the rule starts, not when it is queued: on a busy host a task
+        // can wait seconds for a pool thread, and that wait is not the rule's doing. The clock stops when the
+        // rule returns, so a rule awaited after a slow one reports its own time.
         var task = Task.Run(() =>
         {
             try
             {
+                clock.Start();
+                deadline.CancelAfter(rule.Deadline);
+                began.Set();
                 return Execute(rule, entry, token);
+            }
+            catch (ObjectDisposedException) when (token.IsCancellationRequested)
+            {
+                // The request gave up on this rule before it started (see StartAllowance).
+                throw new OperationCanceledException(token);
             }
             finally
             {
                 clock.Stop();
             }
         }, CancellationToken.None);
-        return new StartedRun(task, deadline, clock, null, null);
+        return new StartedRun(task, deadline, clock, null, null, began);
     }
 
     /// <summary>Runs a trusted rule on the calling thread; an overrun is found when it returns.</summary>
@@ -143,7 +156,18 @@ public sealed class RuleRunner(IRuleExecutor? isolated = null)
         }
 
         using var deadline = run.Deadline!;
-        var finished = WaitQuietly(run.Task!, rule.Deadline + TimeSpan.FromMilliseconds(50));
+        using var began = run.Began!;
+        if (!began.Wait(StartAllowance))
+        {
+            deadline.Cancel();
+            if (!run.Task!.IsCompleted) _runaways[id] = run.Task;
+            return (new RuleRunRecord(id, version, RuleRunStatus.TimedOut, TimeSpan.Zero,
+                $"did not get a thread within {StartAllowance.TotalSeconds:0} s; the host is overloaded", 0), []);
+        }
+
+        // Measured from the rule's own start, with a little grace for a rule that observes cancellation to unwind.
+        var remaining = rule.Deadline - run.Clock!.Elapsed + TimeSpan.FromMilliseconds(50);
+        var finished = WaitQuietly(run.Task!, remaining > TimeSpan.Zero ? remaining : TimeSpan.Zero);
         var elapsed = run.Clock!.Elapsed;
         if (!finished || (run.Task!.IsCanceled && deadline.IsCancellationRequested))
         {
@@ -202,7 +226,8 @@ public sealed class RuleRunner(IRuleExecutor? isolated = null)
     }
 
     private sealed record StartedRun(
-        Task<List<Finding>>? Task, CancellationTokenSource? Deadline, Stopwatch? Clock, string? SkipReason, Task<ExecutorResult>? Isolated)
+        Task<List<Finding>>? Task, CancellationTokenSource? Deadline, Stopwatch? Clock, string? SkipReason, Task<ExecutorResult>? Isolated,
+        ManualResetEventSlim? Began = null)
     {
         /// <summary>A trusted rule, run when its turn comes.</summary>
         public static StartedRun Inline { get; } = new(null, null, null, null, null);
