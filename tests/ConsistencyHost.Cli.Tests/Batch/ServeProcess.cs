@@ -7,13 +7,18 @@ internal sealed class ServeProcess : IDisposable
 {
     private readonly Process _process;
 
-    private ServeProcess(Process process, Uri grpc)
+    private ServeProcess(Process process, Uri grpc, Uri http)
     {
         _process = process;
         Grpc = grpc;
+        Http = http;
     }
 
+    /// <summary>The gRPC address ("listening on ADDRESS").</summary>
     public Uri Grpc { get; }
+
+    /// <summary>The JSON-over-HTTP address ("json over http on ADDRESS", printed right after).</summary>
+    public Uri Http { get; }
 
     public static async Task<ServeProcess> StartAsync()
     {
@@ -39,10 +44,23 @@ internal sealed class ServeProcess : IDisposable
             throw new InvalidOperationException("serve ended without listening: " + await process.StandardError.ReadToEndAsync(timeout.Token));
         }
 
+        const string HttpPrefix = "json over http on ";
+        var httpLine = await process.StandardOutput.ReadLineAsync(timeout.Token);
+        while (httpLine is not null && !httpLine.StartsWith(HttpPrefix, StringComparison.Ordinal))
+        {
+            httpLine = await process.StandardOutput.ReadLineAsync(timeout.Token);
+        }
+
+        if (httpLine is null)
+        {
+            process.Kill(entireProcessTree: true);
+            throw new InvalidOperationException("serve printed no JSON address: " + await process.StandardError.ReadToEndAsync(timeout.Token));
+        }
+
         // Keep draining both pipes so that the host never blocks on a full pipe while logging.
         _ = process.StandardOutput.ReadToEndAsync();
         _ = process.StandardError.ReadToEndAsync();
-        return new ServeProcess(process, new Uri(line[Prefix.Length..]));
+        return new ServeProcess(process, new Uri(line[Prefix.Length..]), new Uri(httpLine[HttpPrefix.Length..]));
     }
 
     public void Dispose()
