@@ -39,12 +39,12 @@ internal sealed class EntryLedger
             var position = Read + 1;
             if (string.IsNullOrEmpty(request.EntryId))
             {
-                throw new ArgumentException($"entry {position} of the input has no entry_id; reports are matched to entries by id", "entries");
+                throw new ArgumentException($"entry {position} of the input has no entry_id; reports are matched to entries by id");
             }
 
             if (_entries.TryGetValue(request.EntryId, out var first))
             {
-                throw new ArgumentException($"entry id '{request.EntryId}' appears twice in the input (entries {first.Position} and {position}); ids must be unique because reports are matched by id", "entries");
+                throw new ArgumentException($"entry id '{request.EntryId}' appears twice in the input (entries {first.Position} and {position}); ids must be unique because reports are matched by id");
             }
 
             _entries[request.EntryId] = new Entry(position);
