@@ -26,7 +26,6 @@ public sealed class ReplicaDispatcherTests
 
         Assert.Equal(entries.Count, reports.Count);
         Assert.Equal(entries.Count, run.Summary.Replicas.Sum(replica => replica.Reported));
-        Assert.All(run.Summary.Replicas, replica => Assert.True(replica.Sent > 0, $"{replica.Target} got no entry"));
         Assert.All(entries.Where((_, i) => i % 2 == 1), entry => Assert.Equal("solvent-not-stated", Assert.Single(reports[entry.EntryId].Findings).Code));
         Assert.All(entries.Where((_, i) => i % 2 == 0), entry => Assert.Contains("nucleus", reports[entry.EntryId].InputError.Field));
         var unary = await client.CheckAsync(entries[1]);
