@@ -18,10 +18,11 @@ public sealed class ReplicaKillTests(ITestOutputHelper output)
     [Fact(Timeout = 120_000)] // a hang guard, not a timing assertion: a lost entry would otherwise wait for ever
     public async Task Dispatch_ReplicaKilledAfterAThird_ReportsEveryEntryExactlyOnce()
     {
-        var entries = await NciEntries.ReadAsync(Entries);
+        var reading = NciEntries.ReadAsync(Entries); // RDKit runs while the hosts start
         var hosts = await Task.WhenAll(ServeProcess.StartAsync(), ServeProcess.StartAsync(), ServeProcess.StartAsync());
         try
         {
+            var entries = await reading;
             using var dispatcher = ReplicaDispatcher.Connect(hosts.Select(host => host.Grpc));
             var run = dispatcher.Dispatch(entries.ToAsyncEnumerable());
             var seen = new Dictionary<string, int>(StringComparer.Ordinal);
