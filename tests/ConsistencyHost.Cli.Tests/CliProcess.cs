@@ -6,14 +6,7 @@ namespace ConsistencyHost.Cli.Tests;
 internal static class CliProcess
 {
     /// <summary>The CLI's output folder, built in the same configuration as the tests.</summary>
-    public static string Directory
-    {
-        get
-        {
-            var configuration = RepoPaths.Configuration;
-            return Path.Combine(RepoPaths.Root, "src", "ConsistencyHost.Cli", "bin", configuration, "net10.0");
-        }
-    }
+    public static string Directory => RepoPaths.Cli;
 
     public static Task<(int ExitCode, string Stdout, string Stderr)> RunAsync(params string[] args) =>
         ChildProcess.RunAsync("dotnet", [Path.Combine(Directory, "consistencyhost.dll"), .. args], RepoPaths.Root);

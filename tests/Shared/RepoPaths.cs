@@ -16,6 +16,9 @@ internal static class RepoPaths
 
     public static string Samples => Path.Combine(Root, "samples");
 
+    /// <summary>The CLI's output folder (consistencyhost.dll and its plugins/), built in the tests' configuration.</summary>
+    public static string Cli => Path.Combine(Root, "src", "ConsistencyHost.Cli", "bin", Configuration, "net10.0");
+
     /// <summary>The build configuration the tests run in (Debug or Release), read from their output folder.</summary>
     public static string Configuration { get; } =
         new DirectoryInfo(AppContext.BaseDirectory.TrimEnd(Path.DirectorySeparatorChar)).Parent!.Name;

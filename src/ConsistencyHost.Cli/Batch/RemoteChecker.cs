@@ -1,63 +1,77 @@
+using System.Collections.Concurrent;
 using System.Runtime.CompilerServices;
-using System.Threading.Channels;
+using ConsistencyHost.Cli.CommandLine;
 using ConsistencyHost.Contract.Mapping;
 using ConsistencyHost.Contract.V1;
+using ConsistencyHost.Dispatch;
 using Grpc.Core;
-using Grpc.Net.Client;
 
 namespace ConsistencyHost.Cli.Batch;
 
 /// <summary>
-/// Checks entries on a running host through the bidirectional CheckEntries call. A sender writes requests while
-/// this reader takes replies in order; at most <see cref="InFlight"/> entries are between the two, so a large
-/// batch never sits in memory. Unreadable items are not sent; their input-error reply is made here, in place.
+/// Checks entries on one or more running hosts through <see cref="ReplicaDispatcher"/>: one CheckEntries stream
+/// per host, entries resubmitted elsewhere when a host is lost, one report per entry in completion order (input
+/// order with a single host). Unreadable items are not sent; their input-error reply is made here.
 /// </summary>
-internal sealed class RemoteChecker(GrpcChannel channel) : IBatchChecker
+internal sealed class RemoteChecker(ReplicaDispatcher dispatcher) : IBatchChecker
 {
-    private const int InFlight = 32;
+    /// <summary>The dispatch's figures, once <see cref="CheckAsync"/> has been enumerated to the end.</summary>
+    public DispatchSummary? Summary { get; private set; }
 
     public async IAsyncEnumerable<(BatchItem Item, CheckEntryResponse Response)> CheckAsync(
         IEnumerable<BatchItem> items, [EnumeratorCancellation] CancellationToken cancellationToken)
     {
-        using var call = new EntryCheck.EntryCheckClient(channel).CheckEntries(cancellationToken: cancellationToken);
-        var pending = Channel.CreateBounded<BatchItem>(InFlight);
-        var sending = SendAsync(items, call.RequestStream, pending.Writer, cancellationToken);
-        await foreach (var item in pending.Reader.ReadAllAsync(cancellationToken))
+        var waiting = new ConcurrentDictionary<string, BatchItem>(StringComparer.Ordinal);
+        var unreadable = new ConcurrentQueue<BatchItem>();
+        var run = dispatcher.Dispatch(Sendable(items, waiting, unreadable).ToAsyncEnumerable());
+        await using (var reports = run.GetAsyncEnumerator(cancellationToken))
         {
-            if (item.Request is null)
+            while (await NextAsync(reports))
             {
-                yield return (item, ReportMapper.ToInputErrorResponse(item.EntryId, item.Problem!.Field, item.Problem.Reason));
-                continue;
+                while (unreadable.TryDequeue(out var bad)) yield return (bad, InputError(bad));
+                var response = reports.Current;
+                yield return waiting.TryRemove(response.EntryId, out var item)
+                    ? (item, response)
+                    : throw new InvalidOperationException($"the dispatcher reported entry '{response.EntryId}', which is not waiting");
             }
-
-            if (!await call.ResponseStream.MoveNext(cancellationToken))
-            {
-                throw new RpcException(new Status(StatusCode.Unavailable, $"the host ended the stream before answering entry '{item.EntryId}'"));
-            }
-
-            yield return (item, call.ResponseStream.Current);
         }
 
-        await sending;
+        while (unreadable.TryDequeue(out var bad)) yield return (bad, InputError(bad));
+        Summary = run.Summary;
     }
 
-    private static async Task SendAsync(
-        IEnumerable<BatchItem> items, IClientStreamWriter<CheckEntryRequest> requests, ChannelWriter<BatchItem> pending, CancellationToken cancellationToken)
+    private static async Task<bool> NextAsync(IAsyncEnumerator<CheckEntryResponse> reports)
     {
         try
         {
-            foreach (var item in items)
-            {
-                await pending.WriteAsync(item, cancellationToken);
-                if (item.Request is not null) await requests.WriteAsync(item.Request, cancellationToken);
-            }
-
-            await requests.CompleteAsync();
-            pending.Complete();
+            return await reports.MoveNextAsync();
         }
-        catch (Exception error)
+        catch (ArgumentException error)
         {
-            pending.Complete(error);
+            throw new UsageException($"with --server {error.Message}");
+        }
+        catch (RpcException error) when (error.StatusCode == StatusCode.Unavailable)
+        {
+            throw new UsageException($"--server: {error.Status.Detail}");
         }
     }
+
+    private static IEnumerable<CheckEntryRequest> Sendable(
+        IEnumerable<BatchItem> items, ConcurrentDictionary<string, BatchItem> waiting, ConcurrentQueue<BatchItem> unreadable)
+    {
+        foreach (var item in items)
+        {
+            if (item.Request is null)
+            {
+                unreadable.Enqueue(item);
+                continue;
+            }
+
+            waiting[item.Request.EntryId] = item;
+            yield return item.Request;
+        }
+    }
+
+    private static CheckEntryResponse InputError(BatchItem item) =>
+        ReportMapper.ToInputErrorResponse(item.EntryId, item.Problem!.Field, item.Problem.Reason);
 }

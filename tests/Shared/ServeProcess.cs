@@ -1,8 +1,11 @@
 using System.Diagnostics;
 
-namespace ConsistencyHost.Cli.Tests.Batch;
+namespace ConsistencyHost.Tests.Shared;
 
-/// <summary>The CLI's <c>serve</c> started as a process on free loopback ports; killed on dispose.</summary>
+/// <summary>
+/// The built CLI's <c>serve</c> started as a process on free loopback ports with its built-in plugins; killed on
+/// dispose. The test project must build the CLI (a project reference with ReferenceOutputAssembly="false").
+/// </summary>
 internal sealed class ServeProcess : IDisposable
 {
     private readonly Process _process;
@@ -20,10 +23,12 @@ internal sealed class ServeProcess : IDisposable
     /// <summary>The JSON-over-HTTP address ("json over http on ADDRESS", printed right after).</summary>
     public Uri Http { get; }
 
+    public bool HasExited => _process.HasExited;
+
     public static async Task<ServeProcess> StartAsync()
     {
-        var start = new ProcessStartInfo("dotnet") { RedirectStandardOutput = true, RedirectStandardError = true, WorkingDirectory = CliProcess.Directory };
-        foreach (var arg in new[] { Path.Combine(CliProcess.Directory, "consistencyhost.dll"), "serve", "--port", "0", "--http-port", "0" })
+        var start = new ProcessStartInfo("dotnet") { RedirectStandardOutput = true, RedirectStandardError = true, WorkingDirectory = RepoPaths.Cli };
+        foreach (var arg in new[] { Path.Combine(RepoPaths.Cli, "consistencyhost.dll"), "serve", "--port", "0", "--http-port", "0" })
         {
             start.ArgumentList.Add(arg);
         }
@@ -63,10 +68,16 @@ internal sealed class ServeProcess : IDisposable
         return new ServeProcess(process, new Uri(line[Prefix.Length..]), new Uri(httpLine[HttpPrefix.Length..]));
     }
 
-    public void Dispose()
+    /// <summary>Kills the host outright (SIGKILL), as a crashed node or an evicted pod would end.</summary>
+    public void Kill()
     {
         _process.Kill(entireProcessTree: true);
         _process.WaitForExit(TimeSpan.FromSeconds(30));
+    }
+
+    public void Dispose()
+    {
+        if (!_process.HasExited) Kill();
         _process.Dispose();
     }
 }
