@@ -1,4 +1,5 @@
 using ConsistencyHost.Contract.V1;
+using ConsistencyHost.Engine.Profiles;
 using ConsistencyHost.Server.Services;
 using Grpc.Core;
 
@@ -45,6 +46,23 @@ public sealed class BackPressureTests
             Assert.All(replies, r => Assert.Null(r.InputError));
             Assert.Equal(Limit, inFlight.PeakPerStream);
             Assert.Equal(0, inFlight.Current);
+        }
+        finally
+        {
+            File.Delete(config);
+        }
+    }
+
+    [Fact]
+    public async Task Build_InFlightLimitBelowOne_IsAStartupErrorNamingTheSetting()
+    {
+        var config = Path.Combine(Path.GetTempPath(), $"ch-backpressure-{Guid.NewGuid():N}.json");
+        await File.WriteAllTextAsync(config, """{ "Server": { "MaxEntriesInFlightPerStream": 0 } }""");
+        try
+        {
+            var error = await Assert.ThrowsAsync<ProfileConfigurationException>(() => RunningHost.StartAsync(["ConsistencyHost.Rules.SpectrumMetadata"], config));
+
+            Assert.Contains("Server:MaxEntriesInFlightPerStream: 0 is not allowed; expected at least 1 entry per stream", error.Problems);
         }
         finally
         {

@@ -42,7 +42,17 @@ internal sealed class RunningHost : IAsyncDisposable
     public static async Task<RunningHost> StartAsync(string[] plugins, string? configFile = null)
     {
         var folder = PluginFolder.With(plugins);
-        var app = ServerApp.Build(new ServerLaunch { PluginsPath = folder.Path, Port = 0, HttpPort = 0, ConfigFile = configFile });
+        WebApplication app;
+        try
+        {
+            app = ServerApp.Build(new ServerLaunch { PluginsPath = folder.Path, Port = 0, HttpPort = 0, ConfigFile = configFile });
+        }
+        catch
+        {
+            folder.Dispose();
+            throw;
+        }
+
         await app.StartAsync().WaitAsync(TimeSpan.FromSeconds(60));
         var endpoints = ServerApp.Endpoints(app);
         return new RunningHost(app, folder, endpoints.Grpc, endpoints.Http);
