@@ -1,7 +1,7 @@
 #!/usr/bin/env bash
 # Streaming batches in bounded memory (docs/streaming.md). Generates entries from real structures with invented
 # peak lists (load only), streams them and records peak working sets (VmHWM) at checkpoints.
-#   bench/streaming.sh --short   CI-sized: 10k entries through one CheckEntries call (~1-2 min); fails when the
+#   bench/streaming.sh --short   CI-sized: 10k entries through one CheckEntries call; fails when the
 #                                host's peak after 10k exceeds its peak after 5k by more than the margin
 #   bench/streaming.sh --full    100k entries: the call (host), `batch` embedded (CLI) and `batch --server`
 #                                (CLI and host); peaks at 10k and at 100k; regenerates docs/streaming.md
