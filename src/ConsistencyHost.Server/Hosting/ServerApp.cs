@@ -48,6 +48,7 @@ public static class ServerApp
             QueueProcessingOrder = QueueProcessingOrder.OldestFirst,
         }));
         builder.Services.AddSingleton(endpoints);
+        builder.Services.AddSingleton(new StreamInFlight(server.MaxEntriesInFlightPerStream));
         builder.Services.AddGrpc(options =>
         {
             options.MaxReceiveMessageSize = server.MaxReceiveMessageBytes;
@@ -98,7 +99,7 @@ public static class ServerApp
     private static ServerOptions ReadServerOptions(IConfigurationSection section)
     {
         var defaults = new ServerOptions();
-        return new ServerOptions
+        var options = new ServerOptions
         {
             Port = section.GetValue("Port", defaults.Port),
             HttpPort = section.GetValue("HttpPort", defaults.HttpPort),
@@ -107,7 +108,11 @@ public static class ServerApp
             MaxSendMessageBytes = section.GetValue("MaxSendMessageBytes", defaults.MaxSendMessageBytes),
             MaxConcurrentCalls = section.GetValue("MaxConcurrentCalls", defaults.MaxConcurrentCalls),
             QueueLimit = section.GetValue("QueueLimit", defaults.QueueLimit),
+            MaxEntriesInFlightPerStream = section.GetValue("MaxEntriesInFlightPerStream", defaults.MaxEntriesInFlightPerStream),
         };
+        return options.MaxEntriesInFlightPerStream >= 1
+            ? options
+            : throw new ProfileConfigurationException([$"Server:MaxEntriesInFlightPerStream: {options.MaxEntriesInFlightPerStream} is not allowed; expected at least 1 entry per stream"]);
     }
 
     private static void ConfigureKestrel(IWebHostBuilder webHost, ServerOptions server, ServerEndpoints endpoints)

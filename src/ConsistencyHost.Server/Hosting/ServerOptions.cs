@@ -31,4 +31,13 @@ public sealed record ServerOptions
 
     /// <summary>Largest reply sent, bytes.</summary>
     public int MaxSendMessageBytes { get; init; } = 16 * 1024 * 1024;
+
+    /// <summary>
+    /// Entries of one CheckEntries stream the host holds at once: read but not yet answered (being checked, or
+    /// waiting for the client to take the reply). At the limit the host stops reading the stream, HTTP/2 flow
+    /// control stops the client's writes, and a client that does not read its replies holds only this many
+    /// entries (plus the transport's fixed windows) in the host. Reaching it is back-pressure, never an error.
+    /// Two lets the next entry be read while one is checked; more only buffers.
+    /// </summary>
+    public int MaxEntriesInFlightPerStream { get; init; } = 4;
 }

@@ -1,4 +1,5 @@
 using System.Diagnostics;
+using System.Threading.Channels;
 using ConsistencyHost.Contract.Mapping;
 using ConsistencyHost.Contract.V1;
 using ConsistencyHost.Engine;
@@ -14,7 +15,7 @@ namespace ConsistencyHost.Server.Services;
 /// (mapped by <see cref="InputErrorInterceptor"/>) and an <c>input_error</c> reply inside a stream, so that one
 /// bad entry does not end a batch. Every entry is logged with its id, profile and timing (<see cref="CheckLog"/>).
 /// </summary>
-public sealed class EntryCheckService(CheckEngine engine, ILogger<EntryCheckService> logger) : EntryCheck.EntryCheckBase
+public sealed class EntryCheckService(CheckEngine engine, StreamInFlight inFlight, ILogger<EntryCheckService> logger) : EntryCheck.EntryCheckBase
 {
     /// <inheritdoc />
     public override Task<CheckEntryResponse> CheckEntry(CheckEntryRequest request, ServerCallContext context) =>
@@ -22,33 +23,53 @@ public sealed class EntryCheckService(CheckEngine engine, ILogger<EntryCheckServ
 
     /// <inheritdoc />
     /// <remarks>
-    /// One entry is read, checked and answered before the next is read, so a slow reader applies
-    /// back-pressure through HTTP/2 flow control and the host never buffers the batch.
+    /// A reader takes entries off the request stream only while this stream holds fewer than
+    /// <see cref="StreamInFlight.LimitPerStream"/> unanswered ones; entries are checked and answered in order.
+    /// A client that does not read its replies blocks the reply writes, the reader stops, HTTP/2 flow control
+    /// stops the client's writes, and the host holds at most the limit (plus the transport's fixed windows).
     /// </remarks>
     public override async Task CheckEntries(
         IAsyncStreamReader<CheckEntryRequest> requestStream,
         IServerStreamWriter<CheckEntryResponse> responseStream,
         ServerCallContext context)
     {
-        await foreach (var request in requestStream.ReadAllAsync(context.CancellationToken))
+        using var slots = inFlight.Open();
+        using var stop = CancellationTokenSource.CreateLinkedTokenSource(context.CancellationToken);
+        var pending = Channel.CreateBounded<CheckEntryRequest>(new BoundedChannelOptions(inFlight.LimitPerStream) { SingleReader = true, SingleWriter = true });
+        var reading = EntryStreamReader.ReadAsync(requestStream, pending.Writer, slots, stop.Token);
+        try
         {
-            CheckEntryResponse response;
-            try
+            await foreach (var request in pending.Reader.ReadAllAsync(context.CancellationToken))
             {
-                response = Check(request, context.CancellationToken);
+                await responseStream.WriteAsync(CheckInStream(request, context.CancellationToken), context.CancellationToken);
+                slots.Answered();
             }
-            catch (EntryInputException error)
-            {
-                response = ReportMapper.ToInputErrorResponse(request.EntryId, error.Field, error.Reason);
-            }
-
-            await responseStream.WriteAsync(response, context.CancellationToken);
         }
+        catch
+        {
+            await stop.CancelAsync();
+            await reading.ConfigureAwait(ConfigureAwaitOptions.SuppressThrowing);
+            throw;
+        }
+
+        await reading;
     }
 
     /// <inheritdoc />
     public override Task<ListRulesResponse> ListRules(ListRulesRequest request, ServerCallContext context) =>
         Task.FromResult(ReportMapper.ToRuleList(engine));
+
+    private CheckEntryResponse CheckInStream(CheckEntryRequest request, CancellationToken cancellationToken)
+    {
+        try
+        {
+            return Check(request, cancellationToken);
+        }
+        catch (EntryInputException error)
+        {
+            return ReportMapper.ToInputErrorResponse(request.EntryId, error.Field, error.Reason);
+        }
+    }
 
     private CheckEntryResponse Check(CheckEntryRequest request, CancellationToken cancellationToken)
     {

@@ -16,7 +16,7 @@ public sealed class CheckLogTests
     {
         using var plugins = PluginFolder.With("ConsistencyHost.Rules.SpectrumMetadata");
         var log = new CollectingLogger();
-        var service = new EntryCheckService(new CheckEngine(new EngineOptions { PluginsPath = plugins.Path }), log);
+        var service = new EntryCheckService(new CheckEngine(new EngineOptions { PluginsPath = plugins.Path }), new StreamInFlight(1), log);
 
         await service.CheckEntry(Requests.MissingSolvent("AIS-LQ-L001"), new MinimalCallContext());
 
@@ -34,7 +34,7 @@ public sealed class CheckLogTests
     {
         using var plugins = PluginFolder.With("ConsistencyHost.Rules.SpectrumMetadata");
         var log = new CollectingLogger();
-        var service = new EntryCheckService(new CheckEngine(new EngineOptions { PluginsPath = plugins.Path }), log);
+        var service = new EntryCheckService(new CheckEngine(new EngineOptions { PluginsPath = plugins.Path }), new StreamInFlight(1), log);
 
         await Assert.ThrowsAsync<ConsistencyHost.Engine.Intake.EntryInputException>(() => service.CheckEntry(Requests.UnknownNucleus("AIS-LQ-L002"), new MinimalCallContext()));
 

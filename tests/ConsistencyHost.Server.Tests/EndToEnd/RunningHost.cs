@@ -2,6 +2,7 @@ using ConsistencyHost.Server.Hosting;
 using ConsistencyHost.Tests.Shared;
 using Grpc.Net.Client;
 using Microsoft.AspNetCore.Builder;
+using Microsoft.Extensions.DependencyInjection;
 
 namespace ConsistencyHost.Server.Tests.EndToEnd;
 
@@ -35,10 +36,23 @@ internal sealed class RunningHost : IAsyncDisposable
     /// <summary>The host's temporary plugin folder; workers carry it in their command line.</summary>
     public string PluginsPath => _plugins.Path;
 
+    /// <summary>A service of the running host (e.g. its stream in-flight counts).</summary>
+    public T Service<T>() where T : notnull => _app.Services.GetRequiredService<T>();
+
     public static async Task<RunningHost> StartAsync(string[] plugins, string? configFile = null)
     {
         var folder = PluginFolder.With(plugins);
-        var app = ServerApp.Build(new ServerLaunch { PluginsPath = folder.Path, Port = 0, HttpPort = 0, ConfigFile = configFile });
+        WebApplication app;
+        try
+        {
+            app = ServerApp.Build(new ServerLaunch { PluginsPath = folder.Path, Port = 0, HttpPort = 0, ConfigFile = configFile });
+        }
+        catch
+        {
+            folder.Dispose();
+            throw;
+        }
+
         await app.StartAsync().WaitAsync(TimeSpan.FromSeconds(60));
         var endpoints = ServerApp.Endpoints(app);
         return new RunningHost(app, folder, endpoints.Grpc, endpoints.Http);

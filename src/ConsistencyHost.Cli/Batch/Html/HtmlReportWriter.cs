@@ -6,15 +6,15 @@ namespace ConsistencyHost.Cli.Batch.Html;
 
 /// <summary>
 /// Writes report.html without holding the reports: each entry's section goes to a scratch file as it arrives,
-/// and only a small summary per entry (its rank and where its section lies) stays in memory. At the end the
-/// page is assembled: totals and the chart first, then the sections copied worst first.
+/// and where it lies goes to a second one (<see cref="SectionIndex"/>); in memory stay only counts. At the end
+/// the page is assembled: totals and the chart first, then the sections copied worst first.
 /// </summary>
 internal sealed class HtmlReportWriter : IDisposable
 {
     private readonly string _target;
     private readonly string _scratchPath;
     private readonly FileStream _scratch;
-    private readonly List<EntrySummary> _entries = [];
+    private readonly SectionIndex _index;
     private readonly Dictionary<(string Rule, Severity Severity), int> _totals = [];
 
     public HtmlReportWriter(string target)
@@ -22,12 +22,13 @@ internal sealed class HtmlReportWriter : IDisposable
         _target = target;
         _scratchPath = target + ".sections.tmp";
         _scratch = new FileStream(_scratchPath, FileMode.Create, FileAccess.ReadWrite, FileShare.None, 1 << 16, FileOptions.DeleteOnClose);
+        _index = new SectionIndex(target + ".index.tmp");
     }
 
     public void Add(BatchItem item, CheckEntryResponse response)
     {
         var bytes = Encoding.UTF8.GetBytes(EntryFragment.Render(item, response));
-        _entries.Add(EntrySummary.Of(response, _entries.Count, _scratch.Position, bytes.Length));
+        _index.Add(SectionKey.Of(response), _scratch.Position, bytes.Length);
         _scratch.Write(bytes);
         foreach (var finding in response.Findings)
         {
@@ -46,13 +47,13 @@ internal sealed class HtmlReportWriter : IDisposable
         }
 
         var buffer = new byte[1 << 16];
-        foreach (var entry in _entries.Order())
+        foreach (var (offset, length) in _index.WorstFirst())
         {
-            _scratch.Position = entry.Offset;
-            for (var left = entry.Length; left > 0;)
+            _scratch.Position = offset;
+            for (var left = length; left > 0;)
             {
                 var read = _scratch.Read(buffer, 0, Math.Min(buffer.Length, left));
-                if (read == 0) throw new IOException($"scratch file ended early at entry {entry.Sequence}");
+                if (read == 0) throw new IOException($"scratch file ended early in the section at offset {offset}");
                 output.Write(buffer, 0, read);
                 left -= read;
             }
@@ -61,12 +62,16 @@ internal sealed class HtmlReportWriter : IDisposable
         output.Write(Encoding.UTF8.GetBytes("<footer>Findings are screening aids for a qualified chemist, not a release decision.</footer>\n</body></html>\n"));
     }
 
-    public void Dispose() => _scratch.Dispose();
+    public void Dispose()
+    {
+        _scratch.Dispose();
+        _index.Dispose();
+    }
 
     private string Summary()
     {
-        int Count(int rank) => _entries.Count(e => e.Rank == rank);
-        return $"<div class=\"summary\"><div><b>{_entries.Count}</b>entries</div><div><b>{Count(EntrySummary.ErrorRank) + Count(EntrySummary.InputRank)}</b>with an error or unreadable</div>"
+        int Count(int rank) => _index.Counts.Where(c => c.Key.Rank == rank).Sum(c => c.Value);
+        return $"<div class=\"summary\"><div><b>{_index.Entries}</b>entries</div><div><b>{Count(SectionKey.ErrorRank) + Count(SectionKey.InputRank)}</b>with an error or unreadable</div>"
             + $"<div><b>{Count(2)}</b>worst is a warning</div><div><b>{Count(1)}</b>worst is info</div><div><b>{Count(0)}</b>no findings</div></div>";
     }
 }
