@@ -35,10 +35,24 @@ internal sealed class RunningHost : IAsyncDisposable
     /// <summary>The host's temporary plugin folder; workers carry it in their command line.</summary>
     public string PluginsPath => _plugins.Path;
 
-    public static async Task<RunningHost> StartAsync(string[] plugins, string? configFile = null)
+    /// <param name="plugins">Built plugins to copy into the host's plugin folder.</param>
+    /// <param name="configFile">A JSON configuration file, or null.</param>
+    /// <param name="folderCreated">Told the plugin folder's path before the host is built (which may throw).</param>
+    public static async Task<RunningHost> StartAsync(string[] plugins, string? configFile = null, Action<string>? folderCreated = null)
     {
         var folder = PluginFolder.With(plugins);
-        var app = ServerApp.Build(new ServerLaunch { PluginsPath = folder.Path, Port = 0, HttpPort = 0, ConfigFile = configFile });
+        folderCreated?.Invoke(folder.Path);
+        WebApplication app;
+        try
+        {
+            app = ServerApp.Build(new ServerLaunch { PluginsPath = folder.Path, Port = 0, HttpPort = 0, ConfigFile = configFile });
+        }
+        catch
+        {
+            folder.Dispose();
+            throw;
+        }
+
         await app.StartAsync().WaitAsync(TimeSpan.FromSeconds(60));
         var endpoints = ServerApp.Endpoints(app);
         return new RunningHost(app, folder, endpoints.Grpc, endpoints.Http);
