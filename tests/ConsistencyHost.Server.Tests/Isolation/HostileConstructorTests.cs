@@ -80,6 +80,39 @@ public sealed class HostileConstructorTests
         }
     }
 
+    [Fact]
+    public async Task Start_WorkerDiesWhileLoadingThePlugin_PluginRefusedWithTheReasonAndHostServes()
+    {
+        string pluginsPath, marker;
+        // The fixture's static constructor ends its process when this file exists.
+        await using (var host = await RunningHost.StartAsync(Plugins, folderCreated: path => File.WriteAllText(MarkerPath(path) + ".crash", "")))
+        {
+            pluginsPath = host.PluginsPath;
+            marker = MarkerPath(pluginsPath);
+            var client = new EntryCheck.EntryCheckClient(host.Channel);
+
+            var rules = await client.ListRulesAsync(new ListRulesRequest(), deadline: DateTime.UtcNow + CallTimeout);
+            var report = await client.CheckEntryAsync(Requests.MissingSolvent("HC-2"), deadline: DateTime.UtcNow + CallTimeout);
+
+            var refused = Assert.Single(rules.Rules, r => r.Plugin == "ConsistencyHost.Fixtures.HostileConstructorRule.dll");
+            Assert.Equal(RuleLoadStatus.Refused, refused.LoadStatus);
+            Assert.StartsWith("could not be described by its worker: ", refused.LoadMessage, StringComparison.Ordinal);
+            Assert.Contains("asked to crash", refused.LoadMessage, StringComparison.Ordinal);
+            Assert.Equal("solvent-not-stated", Assert.Single(report.Findings).Code);
+        }
+
+        try
+        {
+            Assert.Empty(WorkerProcesses.Running(pluginsPath));
+            Assert.All(await File.ReadAllLinesAsync(marker), line => Assert.Contains("ConsistencyHost.Worker.dll", line, StringComparison.Ordinal));
+        }
+        finally
+        {
+            File.Delete(marker);
+            File.Delete(marker + ".crash");
+        }
+    }
+
     /// <summary>Where the fixture leaves its marker (see HostileActs.MarkerPath): named after the plugin folder.</summary>
     private static string MarkerPath(string pluginsPath) =>
         Path.Combine("/tmp", "ch-hostile-ctor-" + Path.GetFileName(pluginsPath) + ".txt");
