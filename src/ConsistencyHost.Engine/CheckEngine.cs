@@ -20,11 +20,16 @@ public sealed class CheckEngine
     /// <summary>Discovers plugins and validates every profile; throws <see cref="ProfileConfigurationException"/>.</summary>
     /// <param name="options">Plugin folder, profiles, deadlines and the trusted plugins.</param>
     /// <param name="limits">Intake limits; null for the defaults.</param>
-    /// <param name="isolatedExecutor">Runs untrusted rules out of process; null runs every rule in-process.</param>
+    /// <param name="isolatedExecutor">Describes and runs untrusted plugins out of process; null loads and runs every plugin in-process.</param>
     public CheckEngine(EngineOptions options, IntakeLimits? limits = null, IRuleExecutor? isolatedExecutor = null)
     {
         Options = options;
-        Rules = [.. PluginDiscovery.Discover(options.PluginsPath, options.SourcePluginCachePath).Select(rule => WithTrust(rule, options))];
+        // With workers on, untrusted plugins are described by their workers and never loaded here; without,
+        // every plugin's code (constructors, options validation, rules) runs in this process.
+        var untrusted = isolatedExecutor is null
+            ? null
+            : new UntrustedPlugins(options.TrustedPlugins.Contains, isolatedExecutor, ProfileResolver.WithDefault(options));
+        Rules = [.. PluginDiscovery.Discover(options.PluginsPath, options.SourcePluginCachePath, untrusted).Select(rule => WithTrust(rule, options))];
         _profiles = ProfileResolver.ResolveAll(options, Rules);
         _intake = new EntryIntake(limits ?? IntakeLimits.Default);
         _isolated = isolatedExecutor;

@@ -12,6 +12,12 @@ public sealed record IsolationOptions
     /// </summary>
     public TimeSpan StartTimeout { get; init; } = TimeSpan.FromSeconds(30);
 
+    /// <summary>
+    /// How long a started worker may take to describe its plugin and bind every profile's options (the plugin's
+    /// options constructors and <c>Validate</c> run then); past it the worker is killed and the plugin refused.
+    /// </summary>
+    public TimeSpan DescribeTimeout { get; init; } = TimeSpan.FromSeconds(30);
+
     /// <summary>Time allowed past a rule's deadline for its reply to arrive before the worker is killed.</summary>
     public TimeSpan DeadlineGrace { get; init; } = TimeSpan.FromMilliseconds(500);
 

@@ -2,6 +2,7 @@ using System.Text.Json;
 using ConsistencyHost.Contract.Mapping;
 using CheckEntryRequest = ConsistencyHost.Contract.V1.CheckEntryRequest;
 using ConsistencyHost.Contract.Worker.V1;
+using ConsistencyHost.Engine.Plugins;
 using ConsistencyHost.Engine.Profiles;
 using ConsistencyHost.Engine.Reports;
 using ConsistencyHost.Engine.Running;
@@ -45,6 +46,37 @@ internal sealed class PluginWorker(string pluginAssembly, IsolationOptions optio
         }
     }
 
+    /// <summary>
+    /// Starts the worker (it loads the plugin) and asks it to describe its rules; the worker stays up for the
+    /// runs that follow. Throws <see cref="WorkerStartException"/> or <see cref="RpcException"/>; the caller turns
+    /// either into a refusal.
+    /// </summary>
+    public async Task<DescribeResponse> DescribeAsync(DescribeRequest request, CancellationToken cancellationToken)
+    {
+        await _gate.WaitAsync(cancellationToken);
+        try
+        {
+            ObjectDisposedException.ThrowIf(_disposed, this);
+            var worker = await EnsureStartedAsync(cancellationToken);
+            try
+            {
+                return await worker.Client.DescribeAsync(request, deadline: DateTime.UtcNow + options.DescribeTimeout, cancellationToken: cancellationToken);
+            }
+            catch (RpcException error)
+            {
+                var exit = await worker.ExitDescriptionAsync(TimeSpan.FromSeconds(5));
+                await StopWorkerAsync();
+                throw new WorkerStartException(exit is not null ? $"its worker died while describing it: {exit}"
+                    : error.StatusCode == StatusCode.DeadlineExceeded ? $"its worker did not describe it within {options.DescribeTimeout.TotalSeconds:0} s; the worker was killed"
+                    : $"the describe call failed ({error.StatusCode}: {error.Status.Detail})");
+            }
+        }
+        finally
+        {
+            _gate.Release();
+        }
+    }
+
     private async Task<WorkerProcess> EnsureStartedAsync(CancellationToken cancellationToken)
     {
         if (_worker is { HasExited: false } running) return running;
@@ -58,7 +90,8 @@ internal sealed class PluginWorker(string pluginAssembly, IsolationOptions optio
         var request = new RunRuleRequest
         {
             RuleId = rule.Descriptor.Id,
-            OptionsJson = JsonSerializer.Serialize(rule.Options, rule.Options.GetType()),
+            // A rule its worker described carries the JSON the worker bound; the host never had its options type.
+            OptionsJson = rule.Options is BoundOptions bound ? bound.Json : JsonSerializer.Serialize(rule.Options, rule.Options.GetType()),
             Entry = entry,
             DeadlineMs = (int)Math.Clamp(rule.Deadline.TotalMilliseconds, 1, int.MaxValue),
         };

@@ -108,7 +108,9 @@ internal sealed class WorkerProcess : IAsyncDisposable
         var reply = await Health.CheckAsync(new HealthCheckRequest(), deadline: DateTime.UtcNow + limit, cancellationToken: cancellationToken);
         if (reply.Status != HealthCheckResponse.Types.ServingStatus.Serving)
         {
-            throw new WorkerStartException($"the worker reports health {reply.Status}");
+            // Not serving means its plugin loaded no rule in the worker; the worker says why.
+            var described = await Client.DescribeAsync(new DescribeRequest(), deadline: DateTime.UtcNow + limit, cancellationToken: cancellationToken);
+            throw new WorkerStartException($"the worker reports health {reply.Status}: {(described.Refusal.Length > 0 ? described.Refusal : "its plugin has no rule")}");
         }
     }
 

@@ -43,6 +43,21 @@ public sealed class WorkerRuleExecutor : IRuleExecutor, IAsyncDisposable, IDispo
     }
 
     /// <inheritdoc />
+    public async Task<IReadOnlyList<RuleDescriptor>> DescribeAsync(string assemblyPath, string plugin, IReadOnlyList<Profile> profiles, CancellationToken cancellationToken)
+    {
+        var worker = _workers.GetOrAdd(assemblyPath, path => new PluginWorker(path, _options, _ledger));
+        try
+        {
+            var response = await worker.DescribeAsync(WorkerDescriptions.Request(profiles), cancellationToken);
+            return WorkerDescriptions.Rules(response, assemblyPath, plugin, profiles);
+        }
+        catch (WorkerStartException error)
+        {
+            return [WorkerDescriptions.Refused(plugin, $"could not be described by its worker: {error.Message}")];
+        }
+    }
+
+    /// <inheritdoc />
     public string? HeldBackReason(RuleDescriptor rule) => _ledger.QuarantineReason(rule.AssemblyPath);
 
     /// <inheritdoc />

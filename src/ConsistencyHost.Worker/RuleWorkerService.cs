@@ -15,12 +15,8 @@ internal sealed class RuleWorkerService(LoadedPlugin plugin) : RuleWorker.RuleWo
 {
     private readonly EntryIntake _intake = new(IntakeLimits.Default);
 
-    public override Task<DescribeResponse> Describe(DescribeRequest request, ServerCallContext context)
-    {
-        var response = new DescribeResponse { Refusal = plugin.Refusal };
-        response.RuleIds.AddRange(plugin.Rules.Keys.Order(StringComparer.Ordinal));
-        return Task.FromResult(response);
-    }
+    public override Task<DescribeResponse> Describe(DescribeRequest request, ServerCallContext context) =>
+        Task.FromResult(RuleDescriber.Describe(plugin, request));
 
     public override Task<RunRuleResponse> RunRule(RunRuleRequest request, ServerCallContext context)
     {

@@ -43,7 +43,16 @@ internal static class EngineFactory
                 AppDomain.CurrentDomain.ProcessExit += (_, _) => executor.Dispose();
             }
 
-            return new CheckEngine(options, isolatedExecutor: executor);
+            try
+            {
+                return new CheckEngine(options, isolatedExecutor: executor);
+            }
+            catch
+            {
+                // The workers that described the plugins go with the engine that could not be built.
+                executor?.Dispose();
+                throw;
+            }
         }
         catch (ProfileConfigurationException error)
         {

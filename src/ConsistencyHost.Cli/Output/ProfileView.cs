@@ -1,6 +1,5 @@
-using System.Globalization;
-using System.Reflection;
 using ConsistencyHost.Engine;
+using ConsistencyHost.Engine.Plugins;
 using ConsistencyHost.Engine.Profiles;
 
 namespace ConsistencyHost.Cli.Output;
@@ -47,20 +46,7 @@ internal sealed record RuleView(
     public static RuleView Disabled(string id, string version) => new(id, version, false, null, [], []);
 
     // The options object after binding holds defaults and overrides alike; its public settable properties are
-    // exactly the keys a profile may set (OptionsBinder accepts the same set).
-    private static List<KeyValuePair<string, string>> OptionValues(object options) =>
-    [
-        .. options.GetType().GetProperties(BindingFlags.Public | BindingFlags.Instance)
-            .Where(p => p.CanWrite && p.Name != "EqualityContract")
-            .OrderBy(p => p.Name, StringComparer.Ordinal)
-            .Select(p => KeyValuePair.Create(p.Name, Invariant(p.GetValue(options)))),
-    ];
-
-    private static string Invariant(object? value) => value switch
-    {
-        null => "",
-        bool b => b ? "true" : "false",
-        IFormattable f => f.ToString(null, CultureInfo.InvariantCulture),
-        _ => value.ToString() ?? "",
-    };
+    // exactly the keys a profile may set. A rule described by a worker carries the values its worker bound.
+    private static IReadOnlyList<KeyValuePair<string, string>> OptionValues(object options) =>
+        options is BoundOptions bound ? bound.Values : OptionText.Values(options);
 }

@@ -13,7 +13,7 @@ public static class WorkerHandshake
     public const int CoreVersion = 1;
 
     /// <summary>Version of consistencyhost.worker.v1 as this build speaks it; bumped on any breaking change.</summary>
-    public const int ProtocolVersion = 1;
+    public const int ProtocolVersion = 2;
 
     /// <summary>Metadata key carrying the per-launch secret on every call.</summary>
     public const string SecretHeader = "x-worker-secret";

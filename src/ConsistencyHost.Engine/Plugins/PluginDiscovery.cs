@@ -1,4 +1,5 @@
 using System.Reflection;
+using ConsistencyHost.Engine.Profiles;
 using ConsistencyHost.Engine.Vetting;
 using ConsistencyHost.Sdk.Rules;
 
@@ -16,7 +17,11 @@ public static class PluginDiscovery
     /// <summary>Discovers, vets and loads every plugin under <paramref name="pluginsPath"/>, ordered by rule id.</summary>
     /// <param name="pluginsPath">The plugin folder.</param>
     /// <param name="sourceCacheRoot">Where compiled source plugins are cached; default <see cref="SourcePluginCompiler.DefaultCacheRoot"/>.</param>
-    public static IReadOnlyList<RuleDescriptor> Discover(string pluginsPath, string? sourceCacheRoot = null)
+    /// <param name="untrusted">
+    /// When workers are on: which plugins are trusted, and the executor that describes the others. Untrusted plugins
+    /// are then vetted here through their metadata only and never loaded into the host. Null loads every plugin here.
+    /// </param>
+    public static IReadOnlyList<RuleDescriptor> Discover(string pluginsPath, string? sourceCacheRoot = null, UntrustedPlugins? untrusted = null)
     {
         if (!Directory.Exists(pluginsPath))
         {
@@ -25,9 +30,28 @@ public static class PluginDiscovery
 
         var compiler = new SourcePluginCompiler(sourceCacheRoot ?? SourcePluginCompiler.DefaultCacheRoot);
         var found = new List<RuleDescriptor>();
+        var described = new List<Task<IReadOnlyList<RuleDescriptor>>>();
         foreach (var candidate in Candidates(pluginsPath))
         {
-            found.AddRange(candidate.SourceFolder is { } folder ? LoadSource(folder, compiler) : LoadPlugin(candidate.AssemblyPath!, candidate.Vetted));
+            var vetted = candidate.SourceFolder is { } folder ? CompileSource(folder, compiler) : VetCompiled(candidate.AssemblyPath!, candidate.Vetted);
+            if (vetted.Refusal is { } refusal)
+            {
+                found.Add(refusal);
+            }
+            else if (untrusted is not null && !untrusted.IsTrusted(vetted.Plugin))
+            {
+                // Task.Run: no caller's synchronisation context is captured by the describe calls awaited below.
+                described.Add(Task.Run(() => untrusted.DescribeAsync(vetted.AssemblyPath, vetted.Plugin)));
+            }
+            else
+            {
+                found.AddRange(LoadInHost(vetted.AssemblyPath, vetted.Plugin));
+            }
+        }
+
+        foreach (var task in described)
+        {
+            found.AddRange(task.GetAwaiter().GetResult());
         }
 
         return RefuseDuplicateIds(found);
@@ -63,7 +87,10 @@ public static class PluginDiscovery
     /// </summary>
     private static readonly TimeSpan SourceCompileLimit = TimeSpan.FromMinutes(2);
 
-    private static IReadOnlyList<RuleDescriptor> LoadSource(string folder, SourcePluginCompiler compiler)
+    /// <summary>A plugin that passed vetting (not yet loaded anywhere), or its refusal.</summary>
+    private sealed record VettedPlugin(string AssemblyPath, string Plugin, RuleDescriptor? Refusal);
+
+    private static VettedPlugin CompileSource(string folder, SourcePluginCompiler compiler)
     {
         var name = Path.GetFileName(folder);
         var plugin = name + SourceSuffix;
@@ -75,16 +102,16 @@ public static class PluginDiscovery
         }
         catch (OperationCanceledException) when (limit.IsCancellationRequested)
         {
-            return [Refused(plugin, $"refused by source vetting: compiling took longer than {SourceCompileLimit.TotalSeconds:0} s", name)];
+            return new("", plugin, Refused(plugin, $"refused by source vetting: compiling took longer than {SourceCompileLimit.TotalSeconds:0} s", name));
         }
         catch (IOException exception)
         {
-            return [Refused(plugin, $"could not be read: {exception.Message}", name)];
+            return new("", plugin, Refused(plugin, $"could not be read: {exception.Message}", name));
         }
 
         return result.IsAccepted
-            ? LoadPlugin(result.AssemblyPath!, [], plugin)
-            : [Refused(plugin, "refused by source vetting: " + string.Join("; ", result.Problems), name)];
+            ? VetCompiled(result.AssemblyPath!, [], plugin)
+            : new("", plugin, Refused(plugin, "refused by source vetting: " + string.Join("; ", result.Problems), name));
     }
 
     /// <summary>
@@ -94,7 +121,8 @@ public static class PluginDiscovery
     public static IReadOnlyList<RuleDescriptor> LoadAssembly(string assemblyPath)
     {
         var folder = Path.GetDirectoryName(Path.GetFullPath(assemblyPath))!;
-        return LoadPlugin(assemblyPath, [.. Directory.EnumerateFiles(folder, "*.dll", SearchOption.AllDirectories).Order(StringComparer.Ordinal)]);
+        var vetted = VetCompiled(assemblyPath, [.. Directory.EnumerateFiles(folder, "*.dll", SearchOption.AllDirectories).Order(StringComparer.Ordinal)]);
+        return vetted.Refusal is { } refusal ? [refusal] : LoadInHost(vetted.AssemblyPath, vetted.Plugin);
     }
 
     private static string? Vet(IReadOnlyList<string> assemblies)
@@ -111,19 +139,28 @@ public static class PluginDiscovery
         return null;
     }
 
-    private static IReadOnlyList<RuleDescriptor> LoadPlugin(string assemblyPath, IReadOnlyList<string> vetted, string? pluginName = null)
+    /// <summary>Checks the SDK version and vets through metadata and IL only: nothing of the plugin runs.</summary>
+    private static VettedPlugin VetCompiled(string assemblyPath, IReadOnlyList<string> vetted, string? pluginName = null)
     {
         var plugin = pluginName ?? Path.GetFileName(assemblyPath);
         try
         {
             var refusal = SdkCompatibility.Check(assemblyPath) ?? Vet(vetted);
-            if (refusal is not null)
-            {
-                return [Refused(plugin, refusal)];
-            }
+            return new(Path.GetFullPath(assemblyPath), plugin, refusal is null ? null : Refused(plugin, refusal));
+        }
+        catch (Exception exception) when (exception is BadImageFormatException or IOException or UnauthorizedAccessException)
+        {
+            return new("", plugin, Refused(plugin, $"could not be read: {exception.Message}"));
+        }
+    }
 
-            var context = new PluginLoadContext(Path.GetFullPath(assemblyPath));
-            var assembly = context.LoadFromAssemblyPath(Path.GetFullPath(assemblyPath));
+    /// <summary>Loads a vetted plugin into its own load context in this process and describes its rules.</summary>
+    private static IReadOnlyList<RuleDescriptor> LoadInHost(string assemblyPath, string plugin)
+    {
+        try
+        {
+            var context = new PluginLoadContext(assemblyPath);
+            var assembly = context.LoadFromAssemblyPath(assemblyPath);
             var rules = RuleTypes(assembly).Select(type => Describe(type, plugin)).ToList();
             return rules.Count > 0 ? rules : [Refused(plugin, "the assembly contains no public rule class")];
         }
@@ -158,7 +195,20 @@ public static class PluginDiscovery
             return Refused(plugin, $"rule class {type.FullName} needs a public parameterless constructor", metadata.Id);
         }
 
-        var probe = (IRule)Activator.CreateInstance(type)!;
+        IRule probe;
+        IReadOnlyList<RuleOptionInfo> schema;
+        try
+        {
+            probe = (IRule)Activator.CreateInstance(type)!;
+            schema = OptionText.Schema(probe.OptionsType);
+        }
+        catch (Exception exception) when (exception is TargetInvocationException or TypeInitializationException or MissingMethodException
+                                              or MemberAccessException or ArgumentException or NotSupportedException)
+        {
+            var error = exception is TargetInvocationException { InnerException: { } inner } ? inner : exception;
+            return Refused(plugin, $"rule class {type.FullName} could not be created: {error.GetType().Name}: {error.Message}", metadata.Id);
+        }
+
         return new RuleDescriptor
         {
             Id = metadata.Id,
@@ -167,6 +217,7 @@ public static class PluginDiscovery
             Nuclei = metadata.Nuclei,
             Plugin = plugin,
             OptionsType = probe.OptionsType,
+            OptionSchema = schema,
             AssemblyPath = type.Assembly.Location,
             Factory = () => (IRule)Activator.CreateInstance(type)!,
         };
@@ -181,7 +232,7 @@ public static class PluginDiscovery
     internal static bool IsSourcePlugin(string plugin) => plugin.EndsWith(SourceSuffix, StringComparison.Ordinal);
 
     /// <summary>"Lab.Rules.dll" → "Lab.Rules"; "Lab.Rules (source)" → "Lab.Rules".</summary>
-    internal static string PluginName(string plugin) =>
+    public static string PluginName(string plugin) =>
         plugin.EndsWith(SourceSuffix, StringComparison.Ordinal) ? plugin[..^SourceSuffix.Length] : Path.GetFileNameWithoutExtension(plugin);
 
     private static IReadOnlyList<RuleDescriptor> RefuseDuplicateIds(List<RuleDescriptor> found)

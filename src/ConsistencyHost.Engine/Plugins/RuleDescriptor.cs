@@ -20,19 +20,28 @@ public sealed record RuleDescriptor
     /// <summary>File name of the plugin assembly.</summary>
     public required string Plugin { get; init; }
 
-    /// <summary>True when the rule can run.</summary>
-    public bool IsLoaded => Factory is not null;
+    /// <summary>True when the rule can run (in the host through <see cref="Factory"/>, or in its worker).</summary>
+    public bool IsLoaded => LoadMessage.Length == 0;
 
     /// <summary>Why the plugin or rule was refused; empty when loaded.</summary>
     public string LoadMessage { get; init; } = "";
 
-    /// <summary>Creates a rule instance; null when refused.</summary>
+    /// <summary>Creates a rule instance; null when refused, and for a rule described by a worker (never loaded in the host).</summary>
     public Func<IRule>? Factory { get; init; }
 
-    /// <summary>The rule's options type; null when refused.</summary>
+    /// <summary>The rule's options type; null when refused or described by a worker.</summary>
     public Type? OptionsType { get; init; }
 
-    /// <summary>Full path of the loaded plugin assembly (a worker loads the same file); empty when refused.</summary>
+    /// <summary>The options a profile may set, with their defaults; empty for a refused rule.</summary>
+    public IReadOnlyList<RuleOptionInfo> OptionSchema { get; init; } = [];
+
+    /// <summary>
+    /// For a rule described by a worker: its options bound and validated there, by profile name. Null for a rule
+    /// loaded in the host, whose options the host binds itself.
+    /// </summary>
+    public IReadOnlyDictionary<string, BoundOptions>? WorkerBindings { get; init; }
+
+    /// <summary>Full path of the plugin assembly (a worker loads this file); empty when refused.</summary>
     public string AssemblyPath { get; init; } = "";
 
     /// <summary>

@@ -3,7 +3,11 @@ using ConsistencyHost.Sdk.Findings;
 
 namespace ConsistencyHost.Engine.Profiles;
 
-/// <summary>A rule ready to run under one profile: validated options, severity overrides, deadline.</summary>
+/// <summary>
+/// A rule ready to run under one profile: validated options, severity overrides, deadline. The options are the
+/// rule's own options object for a rule loaded in the host, and a <see cref="Plugins.BoundOptions"/> (the JSON its
+/// worker bound) for a rule described by a worker.
+/// </summary>
 public sealed record ActiveRule(
     RuleDescriptor Descriptor,
     object Options,

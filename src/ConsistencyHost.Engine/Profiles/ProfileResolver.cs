@@ -11,12 +11,7 @@ public static class ProfileResolver
     /// <summary>Resolves all profiles; throws <see cref="ProfileConfigurationException"/> listing every problem.</summary>
     public static IReadOnlyDictionary<string, ResolvedProfile> ResolveAll(EngineOptions options, IReadOnlyList<RuleDescriptor> rules)
     {
-        var profiles = options.Profiles.ToList();
-        if (!profiles.Any(p => p.Name == Profile.DefaultName))
-        {
-            profiles.Add(new Profile { Name = Profile.DefaultName });
-        }
-
+        var profiles = WithDefault(options);
         var problems = new List<string>();
         var resolved = new Dictionary<string, ResolvedProfile>(StringComparer.Ordinal);
         foreach (var profile in profiles)
@@ -31,6 +26,10 @@ public static class ProfileResolver
 
         return problems.Count == 0 ? resolved : throw new ProfileConfigurationException(problems);
     }
+
+    /// <summary>The configured profiles, plus a "default" profile with every rule at its defaults when none is configured.</summary>
+    public static IReadOnlyList<Profile> WithDefault(EngineOptions options) =>
+        options.Profiles.Any(p => p.Name == Profile.DefaultName) ? options.Profiles : [.. options.Profiles, new Profile { Name = Profile.DefaultName }];
 
     private static ResolvedProfile Resolve(Profile profile, IReadOnlyList<RuleDescriptor> rules, TimeSpan deadline, List<string> problems)
     {
@@ -50,7 +49,7 @@ public static class ProfileResolver
                 continue;
             }
 
-            var (bound, optionProblems) = OptionsBinder.Bind(rule.OptionsType!, settings.Options);
+            var (bound, optionProblems) = Bind(rule, profile.Name, settings);
             problems.AddRange(optionProblems.Select(p => $"profile '{profile.Name}', rule '{rule.Id}': {p}"));
             if (bound is not null)
             {
@@ -59,5 +58,24 @@ public static class ProfileResolver
         }
 
         return new ResolvedProfile(profile.Name, active);
+    }
+
+    /// <summary>
+    /// A rule loaded in the host is bound here; an untrusted rule described by a worker was bound and validated
+    /// there (its options object is never created in the host), and its problems read the same.
+    /// </summary>
+    private static (object? Options, IReadOnlyList<string> Problems) Bind(RuleDescriptor rule, string profile, RuleSettings settings)
+    {
+        if (rule.WorkerBindings is null)
+        {
+            return OptionsBinder.Bind(rule.OptionsType!, settings.Options);
+        }
+
+        if (!rule.WorkerBindings.TryGetValue(profile, out var bound))
+        {
+            return (null, [$"its worker did not bind options for profile '{profile}'"]);
+        }
+
+        return bound.Problems.Count == 0 ? (bound, []) : (null, bound.Problems);
     }
 }

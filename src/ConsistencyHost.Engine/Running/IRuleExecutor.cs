@@ -28,6 +28,17 @@ public interface IRuleExecutor
     /// <param name="cancellationToken">Cancelled when the request is abandoned.</param>
     Task<ExecutorResult> RunAsync(ActiveRule rule, EntrySubmission submission, CancellationToken cancellationToken);
 
+    /// <summary>
+    /// Describes an untrusted plugin without loading it in the host: a worker loads it, reports its rules'
+    /// metadata and option schema, and binds and validates each profile's options for them. A plugin whose
+    /// worker fails, crashes or times out comes back as one refused descriptor with the reason, never an exception.
+    /// </summary>
+    /// <param name="assemblyPath">The plugin's main assembly, already vetted by the host through its metadata.</param>
+    /// <param name="plugin">The plugin's name as discovery lists it (file name, or "Name (source)").</param>
+    /// <param name="profiles">The profiles whose options are bound for each rule.</param>
+    /// <param name="cancellationToken">Cancelled when the host gives up starting.</param>
+    Task<IReadOnlyList<RuleDescriptor>> DescribeAsync(string assemblyPath, string plugin, IReadOnlyList<Profile> profiles, CancellationToken cancellationToken);
+
     /// <summary>Why the rule is currently held back (its plugin is quarantined), or null when it can run.</summary>
     string? HeldBackReason(RuleDescriptor rule);
 }

@@ -34,7 +34,7 @@ public static class ServerApp
 
         var section = builder.Configuration.GetSection("ConsistencyHost");
         var executor = IsolationConfiguration.CreateExecutor(section.GetSection("Isolation"));
-        var engine = new CheckEngine(EngineConfiguration.Read(section, DefaultPluginsPath), isolatedExecutor: executor);
+        var engine = CreateEngine(section, executor);
         var server = ReadServerOptions(builder.Configuration.GetSection("Server"));
         var endpoints = new ServerEndpoints();
         ConfigureKestrel(builder.WebHost, server, endpoints);
@@ -73,6 +73,23 @@ public static class ServerApp
         app.MapGrpcReflectionService();
         OpenApiDocument.Map(app);
         return app;
+    }
+
+    /// <summary>
+    /// The engine; with workers on it starts one per untrusted plugin to describe it, so a configuration error
+    /// (which stops start-up) kills them here rather than leaving them to notice their host is gone.
+    /// </summary>
+    private static CheckEngine CreateEngine(IConfigurationSection section, Isolation.WorkerRuleExecutor? executor)
+    {
+        try
+        {
+            return new CheckEngine(EngineConfiguration.Read(section, DefaultPluginsPath), isolatedExecutor: executor);
+        }
+        catch
+        {
+            executor?.Dispose();
+            throw;
+        }
     }
 
     /// <summary>The addresses the started host actually listens on (resolves port 0): gRPC first, then JSON/HTTP.</summary>

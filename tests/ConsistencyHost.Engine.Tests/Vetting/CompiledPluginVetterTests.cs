@@ -51,6 +51,33 @@ public sealed class CompiledPluginVetterTests
     }
 
     [Fact]
+    public void Vet_ReflectionByName_EveryLookupAndCallIsRefused()
+    {
+        // The calls of the two reflective hostile fixtures (tests/fixtures/ConsistencyHost.Fixtures.Reflective*Rule).
+        var result = Vet("""
+            namespace Lab;
+            public static class Reach
+            {
+                public static object? Run()
+                {
+                    var file = typeof(object).Assembly.GetType("System.IO.File", throwOnError: true)!;
+                    var read = file.GetMethod("ReadAllText", [typeof(string)])!.CreateDelegate<Func<string, string>>();
+                    var socket = Type.GetType("System.Net.Sockets.Socket, System.Net.Sockets", null, null, throwOnError: true)!;
+                    var made = socket.GetConstructors()[0].Invoke([2, 1, 6]);
+                    return socket.GetMethod("Close", Type.EmptyTypes)!.Invoke(made, null) ?? read;
+                }
+            }
+            """);
+
+        Assert.All(result.Problems, p => Assert.Equal(("CHSDK1001", "Lab.Reach.Run"), (p.Code, p.Member)));
+        Assert.Equal(
+            ["System.Reflection.Assembly.GetType", "System.Reflection.ConstructorInfo.Invoke", "System.Reflection.MethodBase.Invoke",
+             "System.Reflection.MethodInfo.CreateDelegate", "System.Type.GetType"],
+            // The API is named with its documentation-id signature; the member name is what this test is about.
+            result.Problems.Select(p => p.Api.Split('(', '`')[0]).Distinct().Order(StringComparer.Ordinal));
+    }
+
+    [Fact]
     public void Vet_BannedBaseType_NamesTheDerivedType()
     {
         var result = Vet("namespace Lab; public sealed class Handler : System.Net.Http.HttpClientHandler { }");

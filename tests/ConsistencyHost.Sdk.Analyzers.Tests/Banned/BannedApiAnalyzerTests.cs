@@ -51,6 +51,32 @@ public sealed class BannedApiAnalyzerTests
                     "unsafe: unsafe code (pointers, fixed, stackalloc into pointers) is enabled"));
 
     [Fact]
+    public Task Analyze_TypeFoundByNameAndBoundToADelegate_ReportsBothReflectionCalls() =>
+        Verify.Analyzer(PluginSource.RuleWithBody("""
+            var file = {|#0:typeof(object).Assembly.GetType("System.IO.File", true)|}!;
+            var read = {|#1:file.GetMethod("ReadAllText", new[] { typeof(string) })!.CreateDelegate(typeof(Func<string, string>))|};
+            """),
+            Verify.Diagnostic(Descriptors.BannedApi).WithLocation(0)
+                .WithArguments("System.Reflection.Assembly.GetType(string, bool)", "M:System.Reflection.Assembly.GetType(System.String,System.Boolean)",
+                    "reflection: finds a type by name, hiding which API is used"),
+            Verify.Diagnostic(Descriptors.BannedApi).WithLocation(1)
+                .WithArguments("System.Reflection.MethodInfo.CreateDelegate(System.Type)", "M:System.Reflection.MethodInfo.CreateDelegate(System.Type)",
+                    "reflection: binds a delegate to a method found at run time"));
+
+    [Fact]
+    public Task Analyze_ConstructorInvokedAndDelegateCreated_ReportsBoth() =>
+        Verify.Analyzer(PluginSource.RuleWithBody("""
+            var made = {|#0:typeof(System.Text.StringBuilder).GetConstructor(Type.EmptyTypes)!.Invoke(Array.Empty<object>())|};
+            var bound = {|#1:Delegate.CreateDelegate(typeof(Func<string>), typeof(string).GetMethod("Empty")!)|};
+            """),
+            Verify.Diagnostic(Descriptors.BannedApi).WithLocation(0)
+                .WithArguments("System.Reflection.ConstructorInfo.Invoke(object?[]?)", "M:System.Reflection.ConstructorInfo.Invoke(System.Object[])",
+                    "reflection: calls a constructor found at run time"),
+            Verify.Diagnostic(Descriptors.BannedApi).WithLocation(1)
+                .WithArguments("System.Delegate.CreateDelegate(System.Type, System.Reflection.MethodInfo)", "M:System.Delegate.CreateDelegate(System.Type,System.Reflection.MethodInfo)",
+                    "reflection: binds a delegate to a method found at run time"));
+
+    [Fact]
     public Task Analyze_PureComputation_ReportsNothing() =>
         Verify.Analyzer(PluginSource.RuleWithBody("""
             var largest = Math.Max(entry.Spectra.Count, 1);

@@ -39,9 +39,13 @@ internal sealed class RunningHost : IAsyncDisposable
     /// <summary>A service of the running host (e.g. its stream in-flight counts).</summary>
     public T Service<T>() where T : notnull => _app.Services.GetRequiredService<T>();
 
-    public static async Task<RunningHost> StartAsync(string[] plugins, string? configFile = null)
+    /// <param name="plugins">Built plugins to copy into the host's plugin folder.</param>
+    /// <param name="configFile">A JSON configuration file, or null.</param>
+    /// <param name="folderCreated">Told the plugin folder's path before the host is built (which may throw).</param>
+    public static async Task<RunningHost> StartAsync(string[] plugins, string? configFile = null, Action<string>? folderCreated = null)
     {
         var folder = PluginFolder.With(plugins);
+        folderCreated?.Invoke(folder.Path);
         WebApplication app;
         try
         {

@@ -25,6 +25,7 @@ public sealed class HostilePluginSuiteTests
         "ConsistencyHost.Fixtures.ThreadingRule",
         "ConsistencyHost.Fixtures.ReflectiveFileRule",
         "ConsistencyHost.Fixtures.ReflectiveSocketRule",
+        "ConsistencyHost.Fixtures.UnseenReflectionRule",
     ];
 
     [Fact]
@@ -39,8 +40,8 @@ public sealed class HostilePluginSuiteTests
         // Generous deadlines: only misbehaviour, never a slow shared machine, may end a run.
         using var config = await HostileConfig.WriteAsync($$"""
             { "ConsistencyHost": { "RuleDeadlineMs": 60000, "Profiles": { "default": { "Rules": {
-                "fixture-reflective-file": { "Options": { "Path": "{{secret}}" } },
-                "fixture-reflective-socket": { "Options": { "Port": "{{port}}" } } } } } } }
+                "fixture-unseen-file": { "Options": { "Path": "{{secret}}" } },
+                "fixture-unseen-socket": { "Options": { "Port": "{{port}}" } } } } } } }
             """);
         string pluginsPath;
         try
@@ -88,15 +89,17 @@ public sealed class HostilePluginSuiteTests
         Assert.Equal(RuleRunStatus.Failed, runs["fixture-allocates"].Status);
         Assert.Contains(nameof(OutOfMemoryException), runs["fixture-allocates"].Message, StringComparison.Ordinal);
 
-        // Reflection slips past vetting; the worker's confinement stops the read and the connection.
-        Assert.Equal(RuleRunStatus.Failed, runs["fixture-reflective-file"].Status);
-        Assert.Contains(ExpectedReadFailure, runs["fixture-reflective-file"].Message, StringComparison.Ordinal);
-        Assert.Equal(RuleRunStatus.Failed, runs["fixture-reflective-socket"].Status);
-        Assert.Contains(nameof(SocketException), runs["fixture-reflective-socket"].Message, StringComparison.Ordinal);
+        // Expression trees over enumerated types slip past vetting; the worker's confinement stops the read and the connection.
+        Assert.Equal(RuleRunStatus.Failed, runs["fixture-unseen-file"].Status);
+        Assert.Contains(ExpectedReadFailure, runs["fixture-unseen-file"].Message, StringComparison.Ordinal);
+        Assert.Equal(RuleRunStatus.Failed, runs["fixture-unseen-socket"].Status);
+        Assert.Contains(nameof(SocketException), runs["fixture-unseen-socket"].Message, StringComparison.Ordinal);
 
         Assert.DoesNotContain(response.Findings, f => f.Code is "read-succeeded" or "connected" or "unreachable");
         Assert.False(runs.ContainsKey("fixture-exits"));
         Assert.False(runs.ContainsKey("fixture-starts-threads"));
+        Assert.False(runs.ContainsKey("fixture-reflective-file"));
+        Assert.False(runs.ContainsKey("fixture-reflective-socket"));
     }
 
     /// <summary>
@@ -116,6 +119,16 @@ public sealed class HostilePluginSuiteTests
         var threads = Assert.Single(rules.Rules, r => r.Plugin == "ConsistencyHost.Fixtures.ThreadingRule.dll");
         Assert.Equal(RuleLoadStatus.Refused, threads.LoadStatus);
         Assert.Contains("System.Threading.Thread", threads.LoadMessage, StringComparison.Ordinal);
+
+        // Reflection by name is on the banned list: both reflective fixtures are refused before anything of them runs.
+        var file = Assert.Single(rules.Rules, r => r.Plugin == "ConsistencyHost.Fixtures.ReflectiveFileRule.dll");
+        Assert.Equal(RuleLoadStatus.Refused, file.LoadStatus);
+        Assert.Contains("CHSDK1001", file.LoadMessage, StringComparison.Ordinal);
+        Assert.Contains("System.Reflection.Assembly.GetType", file.LoadMessage, StringComparison.Ordinal);
+        var socket = Assert.Single(rules.Rules, r => r.Plugin == "ConsistencyHost.Fixtures.ReflectiveSocketRule.dll");
+        Assert.Equal(RuleLoadStatus.Refused, socket.LoadStatus);
+        Assert.Contains("CHSDK1001", socket.LoadMessage, StringComparison.Ordinal);
+        Assert.Contains("System.Type.GetType", socket.LoadMessage, StringComparison.Ordinal);
 
         Assert.Equal("in-process", Assert.Single(rules.Rules, r => r.Id == "spectrum-metadata").Isolation);
         Assert.Equal("worker", Assert.Single(rules.Rules, r => r.Id == "fixture-recurses").Isolation);

@@ -18,7 +18,7 @@ public sealed class WorkerHandshakeTests
     [InlineData(null, "without a handshake line")]
     [InlineData("Now listening on: http://localhost:5000", "is not core|protocol|unix|path|grpc")]
     [InlineData("1|1|tcp|127.0.0.1:1234|grpc", "is not core|protocol|unix|path|grpc")]
-    [InlineData("1|99|unix|/tmp/w.sock|grpc", "protocol 99; this host speaks 1 / 1")]
+    [InlineData("1|99|unix|/tmp/w.sock|grpc", "protocol 99; this host speaks 1 / 2")]
     public void Parse_UnusableLine_SaysWhy(string? line, string expected)
     {
         var (path, problem) = WorkerHandshake.Parse(line);
