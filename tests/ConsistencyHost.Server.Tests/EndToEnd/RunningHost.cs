@@ -35,9 +35,13 @@ internal sealed class RunningHost : IAsyncDisposable
     /// <summary>The host's temporary plugin folder; workers carry it in their command line.</summary>
     public string PluginsPath => _plugins.Path;
 
-    public static async Task<RunningHost> StartAsync(string[] plugins, string? configFile = null)
+    /// <param name="plugins">Built plugins to copy into the host's plugin folder.</param>
+    /// <param name="configFile">A JSON configuration file, or null.</param>
+    /// <param name="arrangePlugins">Called with the plugin folder before the host starts (to add a broken plugin, say).</param>
+    public static async Task<RunningHost> StartAsync(string[] plugins, string? configFile = null, Action<string>? arrangePlugins = null)
     {
         var folder = PluginFolder.With(plugins);
+        arrangePlugins?.Invoke(folder.Path);
         var app = ServerApp.Build(new ServerLaunch { PluginsPath = folder.Path, Port = 0, HttpPort = 0, ConfigFile = configFile });
         await app.StartAsync().WaitAsync(TimeSpan.FromSeconds(60));
         var endpoints = ServerApp.Endpoints(app);
