@@ -3,6 +3,7 @@ using System.Net;
 using System.Threading.RateLimiting;
 using ConsistencyHost.Engine;
 using ConsistencyHost.Engine.Profiles;
+using ConsistencyHost.Isolation;
 using ConsistencyHost.Server.Probes;
 using ConsistencyHost.Server.Services;
 using Microsoft.AspNetCore.Builder;
@@ -73,7 +74,7 @@ public static class ServerApp
         HealthSetup.Map(app);
         app.MapGrpcReflectionService();
         OpenApiDocument.Map(app);
-        LogEngine(app.Services.GetRequiredService<ILoggerFactory>().CreateLogger(typeof(ServerApp)), engine);
+        LogEngine(app.Services.GetRequiredService<ILoggerFactory>().CreateLogger(typeof(ServerApp)), engine, executor);
         return app;
     }
 
@@ -133,8 +134,13 @@ public static class ServerApp
         });
     }
 
-    private static void LogEngine(ILogger logger, CheckEngine engine)
+    private static void LogEngine(ILogger logger, CheckEngine engine, WorkerRuleExecutor? executor)
     {
+        if (executor is { NetworkIsolated: false } && engine.Rules.Any(r => r.IsLoaded && !r.IsTrusted))
+        {
+            HostLog.WorkersShareNetwork(logger, "unshare --net failed, or Isolation:IsolateNetwork is false");
+        }
+
         foreach (var rule in engine.Rules.Where(r => !r.IsLoaded))
         {
             HostLog.PluginRefused(logger, rule.PluginName, rule.Id, rule.LoadMessage);

@@ -14,6 +14,9 @@ internal static partial class HostLog
     [LoggerMessage(EventId = 1001, Level = LogLevel.Warning, Message = "Plugin {Plugin} refused (rule {RuleId}): {Reason}")]
     public static partial void PluginRefused(ILogger logger, string plugin, string ruleId, string reason);
 
+    [LoggerMessage(EventId = 1002, Level = LogLevel.Warning, Message = "Workers of untrusted plugins share the host's network: no network namespace can be created here ({Reason})")]
+    public static partial void WorkersShareNetwork(ILogger logger, string reason);
+
     [LoggerMessage(EventId = 1010, Level = LogLevel.Information, Message = "Worker of plugin {Plugin} ready: {Reason}")]
     public static partial void WorkerWarmedUp(ILogger logger, string plugin, string reason);
 
