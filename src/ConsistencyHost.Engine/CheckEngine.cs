@@ -1,8 +1,10 @@
+using System.Diagnostics;
 using ConsistencyHost.Engine.Intake;
 using ConsistencyHost.Engine.Plugins;
 using ConsistencyHost.Engine.Profiles;
 using ConsistencyHost.Engine.Reports;
 using ConsistencyHost.Engine.Running;
+using ConsistencyHost.Engine.Telemetry;
 
 namespace ConsistencyHost.Engine;
 
@@ -55,7 +57,27 @@ public sealed class CheckEngine
     public ResolvedProfile GetProfile(string? name) => ResolveProfile(name);
 
     /// <summary>Checks one entry; throws <see cref="EntryInputException"/> when it cannot be read at all.</summary>
+    /// <remarks>Measured and traced through <see cref="EngineTelemetry"/> (free when nobody listens).</remarks>
     public CheckReport Check(EntrySubmission submission, CancellationToken cancellationToken = default)
+    {
+        var started = Stopwatch.GetTimestamp();
+        using var activity = EngineTelemetry.StartCheck(submission.EntryId);
+        CheckReport report;
+        try
+        {
+            report = Run(submission, cancellationToken);
+        }
+        catch (EntryInputException error)
+        {
+            EngineTelemetry.CheckRefused(activity, error.Field);
+            throw;
+        }
+
+        EngineTelemetry.CheckEnded(activity, report, Stopwatch.GetElapsedTime(started));
+        return report;
+    }
+
+    private CheckReport Run(EntrySubmission submission, CancellationToken cancellationToken)
     {
         var profile = ResolveProfile(submission.Profile);
         var entry = _intake.Build(submission);

@@ -139,6 +139,7 @@ internal sealed class PluginWorker(string pluginAssembly, IsolationOptions optio
     {
         await StopWorkerAsync();
         ledger.Record(pluginAssembly, message);
+        WorkerTelemetry.Restarted(pluginAssembly);
         return Result(status, message);
     }
 

@@ -3,6 +3,7 @@ using System.Diagnostics;
 using ConsistencyHost.Engine.Intake;
 using ConsistencyHost.Engine.Profiles;
 using ConsistencyHost.Engine.Reports;
+using ConsistencyHost.Engine.Telemetry;
 using ConsistencyHost.Sdk.Entries;
 using ConsistencyHost.Sdk.Findings;
 
@@ -44,6 +45,7 @@ public sealed class RuleRunner(IRuleExecutor? isolated = null)
         {
             var (record, produced) = run.IsInline ? RunInline(rule, entry, cancellationToken) : Await(rule, run);
             runs.Add(record);
+            EngineTelemetry.RuleEnded(record);
             findings.AddRange(produced);
         }
 

@@ -3,12 +3,14 @@ using System.Net;
 using System.Threading.RateLimiting;
 using ConsistencyHost.Engine;
 using ConsistencyHost.Engine.Profiles;
+using ConsistencyHost.Isolation;
+using ConsistencyHost.Server.Probes;
 using ConsistencyHost.Server.Services;
 using Microsoft.AspNetCore.Builder;
 using Microsoft.AspNetCore.Hosting;
 using Microsoft.Extensions.Configuration;
 using Microsoft.Extensions.DependencyInjection;
-using Microsoft.Extensions.Diagnostics.HealthChecks;
+using Microsoft.Extensions.Logging;
 
 namespace ConsistencyHost.Server.Hosting;
 
@@ -58,7 +60,8 @@ public static class ServerApp
             options.Interceptors.Add<InputErrorInterceptor>();
         }).AddJsonTranscoding();
         builder.Services.AddGrpcReflection();
-        builder.Services.AddGrpcHealthChecks().AddCheck("plugins", () => PluginHealth(engine));
+        HealthSetup.Add(builder.Services, engine, executor, HealthOptions.Read(builder.Configuration.GetSection("Server:Health")));
+        TelemetrySetup.Add(builder);
 
         var app = builder.Build();
         JsonBodyLimit.Use(app, endpoints, server.MaxReceiveMessageBytes);
@@ -69,9 +72,10 @@ public static class ServerApp
         }
 
         app.MapGrpcService<EntryCheckService>();
-        app.MapGrpcHealthChecksService();
+        HealthSetup.Map(app);
         app.MapGrpcReflectionService();
         OpenApiDocument.Map(app);
+        LogEngine(app.Services.GetRequiredService<ILoggerFactory>().CreateLogger(typeof(ServerApp)), engine, executor);
         return app;
     }
 
@@ -152,11 +156,18 @@ public static class ServerApp
         });
     }
 
-    private static HealthCheckResult PluginHealth(CheckEngine engine)
+    private static void LogEngine(ILogger logger, CheckEngine engine, WorkerRuleExecutor? executor)
     {
-        var refused = engine.Rules.Count(r => !r.IsLoaded);
-        return refused == 0
-            ? HealthCheckResult.Healthy($"{engine.Rules.Count} rules loaded")
-            : HealthCheckResult.Degraded($"{refused} of {engine.Rules.Count} rules refused");
+        if (executor is { NetworkIsolated: false } && engine.Rules.Any(r => r.IsLoaded && !r.IsTrusted))
+        {
+            HostLog.WorkersShareNetwork(logger, "unshare --net failed, or Isolation:IsolateNetwork is false");
+        }
+
+        foreach (var rule in engine.Rules.Where(r => !r.IsLoaded))
+        {
+            HostLog.PluginRefused(logger, rule.PluginName, rule.Id, rule.LoadMessage);
+        }
+
+        HostLog.EngineBuilt(logger, engine.Rules.Count(r => r.IsLoaded), engine.Rules.Count(r => !r.IsLoaded), string.Join(", ", engine.ProfileNames));
     }
 }

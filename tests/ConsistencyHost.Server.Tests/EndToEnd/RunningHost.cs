@@ -41,7 +41,7 @@ internal sealed class RunningHost : IAsyncDisposable
 
     /// <param name="plugins">Built plugins to copy into the host's plugin folder.</param>
     /// <param name="configFile">A JSON configuration file, or null.</param>
-    /// <param name="folderCreated">Told the plugin folder's path before the host is built (which may throw).</param>
+    /// <param name="folderCreated">Called with the plugin folder's path before the host is built (to add a broken plugin, or to learn where it is when the build throws).</param>
     public static async Task<RunningHost> StartAsync(string[] plugins, string? configFile = null, Action<string>? folderCreated = null)
     {
         var folder = PluginFolder.With(plugins);
