@@ -24,31 +24,31 @@ public static class AccessMessages
     /// <summary>Refusal reason: the client certificate does not chain to the configured authority.</summary>
     public const string UntrustedClientCertificate = "untrusted client certificate";
 
-    internal static string NeedsTls(string address) =>
+    public static string NeedsTls(string address) =>
         $"Server:BindAddress: '{address}' is not a loopback address; serving beyond loopback needs TLS: set Server:Tls:CertificatePath and Server:Tls:KeyPath (PEM files)";
 
-    internal static string NeedsAuthentication(string address) =>
+    public static string NeedsAuthentication(string address) =>
         $"Server:BindAddress: '{address}' is not a loopback address; callers must authenticate: set Server:ApiKeys:<client-name> " +
         $"(keys of at least {MinimumKeyLength} characters) or Server:Tls:ClientCertificateAuthorityPath (mTLS)";
 
-    internal static string NotSet(string key, string because) => $"{key}: not set; {because}";
+    public static string NotSet(string key, string because) => $"{key}: not set; {because}";
 
-    internal static string FileMissing(string key, string path) => $"{key}: '{path}' does not exist";
+    public static string FileMissing(string key, string path) => $"{key}: '{path}' does not exist";
 
-    internal static string Unreadable(string key, string path, string reason) => $"{key}: '{path}' could not be read as PEM: {reason}";
+    public static string Unreadable(string key, string path, string reason) => $"{key}: '{path}' could not be read as PEM: {reason}";
 
-    internal static string AuthorityWithoutTls => NotSet("Server:Tls:CertificatePath", "Server:Tls:ClientCertificateAuthorityPath (mTLS) needs TLS");
+    public static string AuthorityWithoutTls => NotSet("Server:Tls:CertificatePath", "Server:Tls:ClientCertificateAuthorityPath (mTLS) needs TLS");
 
-    internal static string KeyTooShort(string client) =>
+    public static string KeyTooShort(string client) =>
         $"Server:ApiKeys:{client}: the key is shorter than {MinimumKeyLength} characters (generate one with: openssl rand -base64 32)";
 
-    internal static string KeysNotAMap(string child) =>
+    public static string KeysNotAMap(string child) =>
         $"Server:ApiKeys:{child}: expected a map of client name to key, e.g. \"Server\": {{\"ApiKeys\": {{\"eln-prod\": \"<key>\"}}}}";
 
-    internal static string DuplicateKey(string first, string second) =>
+    public static string DuplicateKey(string first, string second) =>
         $"Server:ApiKeys:{second}: the same key as Server:ApiKeys:{first}; give each client its own key";
 
-    internal static string Refusal(string reason) => reason switch
+    public static string Refusal(string reason) => reason switch
     {
         MissingKey => $"unauthenticated: {MissingKey}; send the key in the {KeyHeader} header",
         NoClientCertificate => $"unauthenticated: {NoClientCertificate}; present a certificate issued by the host's client authority",
