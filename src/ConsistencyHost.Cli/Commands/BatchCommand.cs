@@ -1,13 +1,16 @@
 using ConsistencyHost.Cli.Batch;
 using ConsistencyHost.Cli.CommandLine;
+using ConsistencyHost.Cli.Remote;
+using Grpc.Core;
 using Grpc.Net.Client;
 
 namespace ConsistencyHost.Cli.Commands;
 
 /// <summary>
 /// <c>batch</c>: checks a folder of entry files or an SD file, streaming, with the embedded engine or a running
-/// host (--server), and writes reports.jsonl and report.html into --out. Exit 0 when no entry has an error
-/// finding, 1 when one has (an unreadable entry counts), 2 for unusable input or command line.
+/// host (--server, with --api-key-file or CONSISTENCYHOST_API_KEY and --ca-cert for a host that demands them), and
+/// writes reports.jsonl and report.html into --out. Exit 0 when no entry has an error finding, 1 when one has (an
+/// unreadable entry counts), 2 for unusable input or command line, or a host that refuses the caller.
 /// </summary>
 internal static class BatchCommand
 {
@@ -16,9 +19,12 @@ internal static class BatchCommand
         ["--out"] = "--out",
         ["--profile"] = "--profile",
         ["--server"] = "--server",
+        ["--api-key-file"] = "--api-key-file",
+        ["--ca-cert"] = "--ca-cert",
     };
 
-    public const string Usage = "batch (DIR | FILE.sdf) --out DIR [--profile NAME] [--config FILE] [--plugins DIR] [--server URL]";
+    public const string Usage = "batch (DIR | FILE.sdf) --out DIR [--profile NAME] [--config FILE] [--plugins DIR]\n" +
+        "      [--server URL [--api-key-file PATH] [--ca-cert PATH]]   (key also from env CONSISTENCYHOST_API_KEY)";
 
     public static async Task<int> RunAsync(IReadOnlyList<string> raw, TextWriter stdout)
     {
@@ -30,14 +36,26 @@ internal static class BatchCommand
         var profile = args.Value("--profile");
         var items = source.Read().Select(item => WithProfile(item, profile));
 
+        if (!args.Has("--server") && (args.Has("--api-key-file") || args.Has("--ca-cert")))
+        {
+            throw new UsageException("--api-key-file and --ca-cert apply to a host given with --server");
+        }
+
         using var channel = args.Value("--server") is { } server ? OpenChannel(server, args) : null;
         IBatchChecker checker = channel is null ? new EmbeddedChecker(EngineFactory.Create(args)) : new RemoteChecker(channel);
         using var outputs = new BatchOutputs(outFolder);
         var progress = new BatchProgress(Console.Error, total, TimeProvider.System, inPlace: !Console.IsErrorRedirected);
-        await foreach (var (item, response) in checker.CheckAsync(items, CancellationToken.None))
+        try
         {
-            outputs.Add(item, response);
-            progress.Advance();
+            await foreach (var (item, response) in checker.CheckAsync(items, CancellationToken.None))
+            {
+                outputs.Add(item, response);
+                progress.Advance();
+            }
+        }
+        catch (RpcException error) when (error.StatusCode == StatusCode.Unauthenticated)
+        {
+            throw new UsageException($"the host refused the call ({error.Status.Detail}); give its key with --api-key-file PATH or {ServerChannel.KeyVariable}");
         }
 
         progress.Finish();
@@ -62,9 +80,7 @@ internal static class BatchCommand
             throw new UsageException("--plugins and --config configure the embedded engine; with --server the host's own configuration applies");
         }
 
-        return Uri.TryCreate(server, UriKind.Absolute, out var address) && address.Scheme is "http" or "https"
-            ? GrpcChannel.ForAddress(address)
-            : throw new UsageException($"--server must be an http:// or https:// address, not '{server}'");
+        return ServerChannel.Open(server, args);
     }
 
     private static BatchItem WithProfile(BatchItem item, string? profile)

@@ -3,6 +3,7 @@ using System.Text.Json;
 using ConsistencyHost.Contract.V1;
 using ConsistencyHost.Server.Access;
 using ConsistencyHost.Server.Tests.EndToEnd;
+using ConsistencyHost.Tests.Shared;
 using Google.Protobuf;
 using Grpc.Core;
 using Grpc.Health.V1;

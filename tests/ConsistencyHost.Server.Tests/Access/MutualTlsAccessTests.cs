@@ -1,6 +1,7 @@
 using ConsistencyHost.Contract.V1;
 using ConsistencyHost.Server.Access;
 using ConsistencyHost.Server.Tests.EndToEnd;
+using ConsistencyHost.Tests.Shared;
 using Grpc.Core;
 using Grpc.Health.V1;
 

@@ -2,7 +2,7 @@ using System.Net;
 using System.Security.Cryptography;
 using System.Security.Cryptography.X509Certificates;
 
-namespace ConsistencyHost.Server.Tests.Access;
+namespace ConsistencyHost.Tests.Shared;
 
 /// <summary>
 /// A private certificate authority made at test time, with a server certificate for the given addresses and
