@@ -57,6 +57,12 @@ internal static class BatchCommand
         {
             throw new UsageException($"the host refused the call ({error.Status.Detail}); give its key with --api-key-file PATH or {ServerChannel.KeyVariable}");
         }
+        catch (RpcException error) when (channel is not null && (error.StatusCode == StatusCode.Unavailable || error.Status.DebugException is HttpRequestException))
+        {
+            // Unreachable (UNAVAILABLE), or TLS could not be set up (INTERNAL from the HTTP layer): often a private CA
+            // that this machine does not trust.
+            throw new UsageException($"could not reach the host at {args.Value("--server")}: {error.Status.Detail} ({error.Status.DebugException?.Message}); for a host with a private CA give --ca-cert PATH");
+        }
 
         progress.Finish();
         outputs.Complete($"ConsistencyHost batch report: {Path.GetFileName(Path.TrimEndingDirectorySeparator(input))}");

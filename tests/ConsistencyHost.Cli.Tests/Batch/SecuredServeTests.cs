@@ -50,12 +50,14 @@ public sealed class SecuredServeTests(SecuredServeTests.Host host) : IClassFixtu
     }
 
     [Fact]
-    public async Task Batch_WithoutCaCert_DoesNotTrustThePrivateCa()
+    public async Task Batch_WithoutCaCert_DoesNotTrustThePrivateCaAndSaysSo()
     {
-        var (exit, _, _) = await CliProcess.RunAsync("batch", Path.Combine(RepoPaths.Samples, "entries"), "--out", _out,
+        var (exit, stdout, stderr) = await CliProcess.RunAsync("batch", Path.Combine(RepoPaths.Samples, "entries"), "--out", _out,
             "--server", host.Address.ToString(), "--api-key-file", host.KeyFile);
 
-        Assert.NotEqual(0, exit);
+        Assert.Equal(2, exit);
+        Assert.Equal("", stdout);
+        Assert.Contains("--ca-cert", stderr, StringComparison.Ordinal);
         Assert.False(File.Exists(Path.Combine(_out, "reports.jsonl")) && File.ReadLines(Path.Combine(_out, "reports.jsonl")).Any());
     }
 
