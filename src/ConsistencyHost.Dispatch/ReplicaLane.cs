@@ -44,6 +44,13 @@ internal sealed class ReplicaLane(GrpcChannel channel, ILaneHub hub)
                 await stream.RunAsync(finished, abort);
                 return;
             }
+            catch (RpcException error) when (!abort.IsCancellationRequested && IsRefusal(error.StatusCode))
+            {
+                // The host refused the caller (a missing or wrong key): every replica of one deployment would,
+                // and sending again cannot help. The dispatch ends with the host's own reason.
+                hub.Fail(error);
+                return;
+            }
             catch (Exception error) when (!abort.IsCancellationRequested)
             {
                 inARow = stream.Reported > 0 ? 1 : inARow + 1;
@@ -57,6 +64,8 @@ internal sealed class ReplicaLane(GrpcChannel channel, ILaneHub hub)
             }
         }
     }
+
+    private static bool IsRefusal(StatusCode status) => status is StatusCode.Unauthenticated or StatusCode.PermissionDenied;
 
     private bool GiveUpAfter(int inARow, Exception cause)
     {

@@ -10,4 +10,8 @@ internal static class CliProcess
 
     public static Task<(int ExitCode, string Stdout, string Stderr)> RunAsync(params string[] args) =>
         ChildProcess.RunAsync("dotnet", [Path.Combine(Directory, "consistencyhost.dll"), .. args], RepoPaths.Root);
+
+    /// <summary>As <see cref="RunAsync(string[])"/>, with extra environment variables.</summary>
+    public static Task<(int ExitCode, string Stdout, string Stderr)> RunWithEnvironmentAsync(IReadOnlyDictionary<string, string> environment, params string[] args) =>
+        ChildProcess.RunAsync("dotnet", [Path.Combine(Directory, "consistencyhost.dll"), .. args], RepoPaths.Root, environment: environment);
 }

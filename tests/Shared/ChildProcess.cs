@@ -6,7 +6,8 @@ namespace ConsistencyHost.Tests.Shared;
 internal static class ChildProcess
 {
     public static async Task<(int ExitCode, string Stdout, string Stderr)> RunAsync(
-        string file, IEnumerable<string> args, string? workingDirectory = null, TimeSpan? timeout = null)
+        string file, IEnumerable<string> args, string? workingDirectory = null, TimeSpan? timeout = null,
+        IReadOnlyDictionary<string, string>? environment = null)
     {
         var start = new ProcessStartInfo(file)
         {
@@ -15,6 +16,7 @@ internal static class ChildProcess
             WorkingDirectory = workingDirectory ?? Environment.CurrentDirectory,
         };
         foreach (var arg in args) start.ArgumentList.Add(arg);
+        foreach (var (name, value) in environment ?? new Dictionary<string, string>()) start.Environment[name] = value;
         using var process = Process.Start(start)!;
         var stdout = process.StandardOutput.ReadToEndAsync();
         var stderr = process.StandardError.ReadToEndAsync();

@@ -2,7 +2,9 @@ namespace ConsistencyHost.Tests.Shared;
 
 /// <summary>
 /// A temporary plugin folder holding copies of chosen built plugins (built-in and fixtures), laid out as
-/// the host expects: one sub-folder per plugin. Deleted on dispose.
+/// the host expects: one sub-folder per plugin. Deleted on dispose. Modes are set explicitly (folders 0755,
+/// files 0644) rather than left to the umask: the host refuses a plugin folder its group or others may write,
+/// and the machine running the tests has a umask nobody here chose.
 /// </summary>
 internal sealed class PluginFolder : IDisposable
 {
@@ -14,7 +16,7 @@ internal sealed class PluginFolder : IDisposable
     public static PluginFolder With(params string[] pluginNames)
     {
         var path = System.IO.Path.Combine(System.IO.Path.GetTempPath(), "ch-plugins-" + Guid.NewGuid().ToString("N"));
-        Directory.CreateDirectory(path);
+        CreateFolder(path);
         foreach (var name in pluginNames)
         {
             var source = new[] { RepoPaths.BuiltInPlugins, RepoPaths.FixturePlugins, RepoPaths.SamplePlugins }
@@ -38,14 +40,38 @@ internal sealed class PluginFolder : IDisposable
         }
     }
 
+    /// <summary>Creates a folder (and any missing parents) with mode 0755; returns its path.</summary>
+    public static string CreateFolder(string path)
+    {
+        if (OperatingSystem.IsWindows()) return Directory.CreateDirectory(path).FullName;
+        var created = Directory.CreateDirectory(path, FolderMode);
+        // CreateDirectory's mode still passes through the umask; chmod does not.
+        File.SetUnixFileMode(created.FullName, FolderMode);
+        return created.FullName;
+    }
+
+    /// <summary>Writes a file with mode 0644, creating its folder as <see cref="CreateFolder"/> does.</summary>
+    public static void WriteFile(string path, string text)
+    {
+        CreateFolder(System.IO.Path.GetDirectoryName(path)!);
+        File.WriteAllText(path, text);
+        if (!OperatingSystem.IsWindows()) File.SetUnixFileMode(path, FileMode);
+    }
+
+    private const UnixFileMode FolderMode = UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.UserExecute |
+        UnixFileMode.GroupRead | UnixFileMode.GroupExecute | UnixFileMode.OtherRead | UnixFileMode.OtherExecute;
+
+    private const UnixFileMode FileMode = UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.GroupRead | UnixFileMode.OtherRead;
+
     private static void CopyDirectory(string source, string target)
     {
-        Directory.CreateDirectory(target);
+        CreateFolder(target);
         foreach (var file in Directory.EnumerateFiles(source, "*", SearchOption.AllDirectories))
         {
             var destination = System.IO.Path.Combine(target, System.IO.Path.GetRelativePath(source, file));
-            Directory.CreateDirectory(System.IO.Path.GetDirectoryName(destination)!);
+            CreateFolder(System.IO.Path.GetDirectoryName(destination)!);
             File.Copy(file, destination, overwrite: true);
+            if (!OperatingSystem.IsWindows()) File.SetUnixFileMode(destination, FileMode);
         }
     }
 }

@@ -25,13 +25,15 @@ internal sealed class ServeProcess : IDisposable
 
     public bool HasExited => _process.HasExited;
 
-    public static async Task<ServeProcess> StartAsync()
+    public static async Task<ServeProcess> StartAsync(string[]? extraArgs = null, IReadOnlyDictionary<string, string>? environment = null)
     {
         var start = new ProcessStartInfo("dotnet") { RedirectStandardOutput = true, RedirectStandardError = true, WorkingDirectory = RepoPaths.Cli };
-        foreach (var arg in new[] { Path.Combine(RepoPaths.Cli, "consistencyhost.dll"), "serve", "--port", "0", "--http-port", "0" })
+        foreach (var arg in new[] { Path.Combine(RepoPaths.Cli, "consistencyhost.dll"), "serve", "--port", "0", "--http-port", "0" }.Concat(extraArgs ?? []))
         {
             start.ArgumentList.Add(arg);
         }
+
+        foreach (var (name, value) in environment ?? new Dictionary<string, string>()) start.Environment[name] = value;
 
         var process = Process.Start(start)!;
         using var timeout = new CancellationTokenSource(TimeSpan.FromMinutes(1));

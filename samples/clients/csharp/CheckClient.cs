@@ -1,5 +1,6 @@
 using ConsistencyHost.Contract.V1;
 using Grpc.Core;
+using Grpc.Core.Interceptors;
 using Grpc.Net.Client;
 using Grpc.Net.Client.Configuration;
 
@@ -7,7 +8,8 @@ namespace ConsistencyHost.Client;
 
 /// <summary>
 /// A small convenience wrapper over the generated <see cref="EntryCheck.EntryCheckClient"/>: one reusable
-/// channel, a deadline on every call, and retries of the unary calls on UNAVAILABLE only.
+/// channel, a deadline on every call, retries of the unary calls on UNAVAILABLE only, and the API key (if any)
+/// in every call's metadata.
 /// </summary>
 /// <remarks>
 /// Retrying only UNAVAILABLE, and only idempotent calls, follows AIP-194 (googleapis/aip, aip/general/0194.md):
@@ -20,7 +22,7 @@ public sealed class CheckClient : IDisposable
     private readonly EntryCheck.EntryCheckClient _client;
     private readonly CheckClientOptions _options;
 
-    /// <summary>Opens a channel to <paramref name="address"/> (e.g. http://127.0.0.1:5151).</summary>
+    /// <summary>Opens a channel to <paramref name="address"/> (e.g. http://127.0.0.1:5151 or https://checks.example.org:5151).</summary>
     public CheckClient(Uri address, CheckClientOptions? options = null)
     {
         _options = options ?? CheckClientOptions.Default;
@@ -29,7 +31,15 @@ public sealed class CheckClient : IDisposable
             HttpHandler = _options.HttpHandler,
             ServiceConfig = new ServiceConfig { MethodConfigs = { RetryUnary(_options) } },
         });
-        _client = new EntryCheck.EntryCheckClient(_channel);
+        // An interceptor rather than CallCredentials: those are sent over TLS only, and a loopback host with keys is cleartext.
+        var invoker = _options.ApiKey is { } key
+            ? _channel.Intercept(metadata =>
+            {
+                metadata.Add("x-api-key", key);
+                return metadata;
+            })
+            : _channel.CreateCallInvoker();
+        _client = new EntryCheck.EntryCheckClient(invoker);
     }
 
     /// <summary>Checks one entry. Throws <see cref="RpcException"/> for unusable input (INVALID_ARGUMENT).</summary>

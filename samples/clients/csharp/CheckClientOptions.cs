@@ -18,6 +18,12 @@ public sealed record CheckClientOptions
     /// <summary>Deadline of one call, retries included (deadlines span retries in gRPC).</summary>
     public TimeSpan CallTimeout { get; init; } = TimeSpan.FromSeconds(30);
 
+    /// <summary>
+    /// The key the host issued to this client, sent in the <c>x-api-key</c> metadata of every call; null sends none
+    /// (a loopback host without keys). Read it from a secret store or a file, not from source code.
+    /// </summary>
+    public string? ApiKey { get; init; }
+
     /// <summary>A handler to send through (tests, proxies); null uses a pooled SocketsHttpHandler.</summary>
     public HttpMessageHandler? HttpHandler { get; init; }
 }

@@ -1,14 +1,16 @@
 using ConsistencyHost.Cli.Batch;
 using ConsistencyHost.Cli.CommandLine;
-using ConsistencyHost.Dispatch;
+using ConsistencyHost.Cli.Remote;
+using Grpc.Core;
 
 namespace ConsistencyHost.Cli.Commands;
 
 /// <summary>
 /// <c>batch</c>: checks a folder of entry files or an SD file, streaming, with the embedded engine or running hosts
-/// (--server, one address or several, comma-separated or repeated), and writes reports.jsonl and report.html into
-/// --out. Exit 0 when no entry has an error finding, 1 when one has (an unreadable entry counts), 2 for unusable
-/// input or command line (with --server: a repeated entry id, or no host answering).
+/// (--server, one address or several, comma-separated or repeated; --api-key-file or CONSISTENCYHOST_API_KEY and
+/// --ca-cert for hosts that demand them), and writes reports.jsonl and report.html into --out. Exit 0 when no entry
+/// has an error finding, 1 when one has (an unreadable entry counts), 2 for unusable input or command line (with
+/// --server: a repeated entry id, no host answering, or a host that refuses the caller).
 /// </summary>
 internal static class BatchCommand
 {
@@ -17,9 +19,12 @@ internal static class BatchCommand
         ["--out"] = "--out",
         ["--profile"] = "--profile",
         ["--server"] = "--server",
+        ["--api-key-file"] = "--api-key-file",
+        ["--ca-cert"] = "--ca-cert",
     };
 
-    public const string Usage = "batch (DIR | FILE.sdf) --out DIR [--profile NAME] [--config FILE] [--plugins DIR] [--server URL[,URL...]]";
+    public const string Usage = "batch (DIR | FILE.sdf) --out DIR [--profile NAME] [--config FILE] [--plugins DIR]\n" +
+        "      [--server URL[,URL...] [--api-key-file PATH] [--ca-cert PATH]]   (key also from env CONSISTENCYHOST_API_KEY)";
 
     public static async Task<int> RunAsync(IReadOnlyList<string> raw, TextWriter stdout)
     {
@@ -31,15 +36,33 @@ internal static class BatchCommand
         var profile = args.Value("--profile");
         var items = source.Read().Select(item => WithProfile(item, profile));
 
-        using var dispatcher = args.Has("--server") ? OpenDispatcher(args) : null;
-        var remote = dispatcher is null ? null : new RemoteChecker(dispatcher);
+        if (!args.Has("--server") && (args.Has("--api-key-file") || args.Has("--ca-cert")))
+        {
+            throw new UsageException("--api-key-file and --ca-cert apply to hosts given with --server");
+        }
+
+        using var hosts = args.Has("--server") ? OpenHosts(args) : null;
+        var remote = hosts is null ? null : new RemoteChecker(hosts.Dispatcher);
         IBatchChecker checker = remote ?? (IBatchChecker)new EmbeddedChecker(EngineFactory.Create(args));
         using var outputs = new BatchOutputs(outFolder);
         var progress = new BatchProgress(Console.Error, total, TimeProvider.System, inPlace: !Console.IsErrorRedirected);
-        await foreach (var (item, response) in checker.CheckAsync(items, CancellationToken.None))
+        try
         {
-            outputs.Add(item, response);
-            progress.Advance();
+            await foreach (var (item, response) in checker.CheckAsync(items, CancellationToken.None))
+            {
+                outputs.Add(item, response);
+                progress.Advance();
+            }
+        }
+        catch (RpcException error) when (error.StatusCode == StatusCode.Unauthenticated)
+        {
+            throw new UsageException($"the host refused the call ({error.Status.Detail}); give its key with --api-key-file PATH or {ServerChannel.KeyVariable}");
+        }
+        catch (RpcException error) when (hosts is not null && (error.StatusCode == StatusCode.Unavailable || error.Status.DebugException is HttpRequestException))
+        {
+            // Unreachable (UNAVAILABLE), or TLS could not be set up (INTERNAL from the HTTP layer): often a private CA
+            // that this machine does not trust.
+            throw new UsageException($"could not reach the host at {hosts.Description}: {error.Status.Detail} ({error.Status.DebugException?.Message}); for a host with a private CA give --ca-cert PATH");
         }
 
         progress.Finish();
@@ -58,25 +81,14 @@ internal static class BatchCommand
         throw new UsageException($"batch input '{input}' does not exist");
     }
 
-    private static ReplicaDispatcher OpenDispatcher(ParsedArguments args)
+    private static RemoteHosts OpenHosts(ParsedArguments args)
     {
         if (args.Has("--plugins") || args.Has("--config"))
         {
             throw new UsageException("--plugins and --config configure the embedded engine; with --server the host's own configuration applies");
         }
 
-        var addresses = args.Values("--server").SelectMany(value => value.Split(',', StringSplitOptions.TrimEntries)).Select(ServerAddress).ToList();
-        var repeated = addresses.GroupBy(address => address).FirstOrDefault(group => group.Count() > 1);
-        if (repeated is not null) throw new UsageException($"--server lists {repeated.Key} twice; give each host once");
-        return ReplicaDispatcher.Connect(addresses);
-    }
-
-    private static Uri ServerAddress(string text)
-    {
-        if (text.Length == 0) throw new UsageException("--server has an empty address; expected URL or URL1,URL2,... (http:// or https://)");
-        return Uri.TryCreate(text, UriKind.Absolute, out var address) && address.Scheme is "http" or "https"
-            ? address
-            : throw new UsageException($"--server must be an http:// or https:// address, not '{text}'");
+        return RemoteHosts.Open(args);
     }
 
     private static BatchItem WithProfile(BatchItem item, string? profile)

@@ -9,7 +9,8 @@ namespace ConsistencyHost.Cli.Commands;
 /// <summary>
 /// <c>serve</c>: starts the gRPC host. Prints "listening on ADDRESS" (gRPC) and then "json over http on ADDRESS"
 /// to stdout once it accepts calls (scripts and tests read the ports from them when started with port 0), and
-/// stops on Ctrl+C or SIGTERM.
+/// stops on Ctrl+C or SIGTERM. --bind, --tls-cert, --tls-key and --client-ca set Server:BindAddress and
+/// Server:Tls:*; API keys come only from configuration or the environment (Server__ApiKeys__NAME), never a flag.
 /// </summary>
 internal static class ServeCommand
 {
@@ -17,9 +18,14 @@ internal static class ServeCommand
     {
         ["--port"] = "--port",
         ["--http-port"] = "--http-port",
+        ["--bind"] = "--bind",
+        ["--tls-cert"] = "--tls-cert",
+        ["--tls-key"] = "--tls-key",
+        ["--client-ca"] = "--client-ca",
     };
 
-    public const string Usage = "serve [--port N] [--http-port N] [--plugins DIR] [--config FILE]";
+    public const string Usage = "serve [--port N] [--http-port N] [--bind ADDRESS] [--tls-cert PATH --tls-key PATH] [--client-ca PATH]\n" +
+        "      [--plugins DIR] [--config FILE]   (API keys: config Server:ApiKeys or env Server__ApiKeys__NAME)";
 
     public static async Task<int> RunAsync(IReadOnlyList<string> raw, TextWriter stdout)
     {
@@ -35,7 +41,17 @@ internal static class ServeCommand
         Microsoft.AspNetCore.Builder.WebApplication app;
         try
         {
-            app = ServerApp.Build(new ServerLaunch { ConfigFile = args.Value("--config"), PluginsPath = args.Value("--plugins"), Port = port, HttpPort = httpPort });
+            app = ServerApp.Build(new ServerLaunch
+            {
+                ConfigFile = args.Value("--config"),
+                PluginsPath = args.Value("--plugins"),
+                Port = port,
+                HttpPort = httpPort,
+                BindAddress = args.Value("--bind"),
+                TlsCertificatePath = args.Value("--tls-cert"),
+                TlsKeyPath = args.Value("--tls-key"),
+                ClientCertificateAuthorityPath = args.Value("--client-ca"),
+            });
         }
         catch (ProfileConfigurationException error)
         {

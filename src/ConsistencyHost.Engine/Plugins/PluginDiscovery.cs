@@ -1,5 +1,6 @@
 using System.Reflection;
 using ConsistencyHost.Engine.Profiles;
+using ConsistencyHost.Engine.Plugins.Safety;
 using ConsistencyHost.Engine.Vetting;
 using ConsistencyHost.Sdk.Rules;
 
@@ -10,7 +11,8 @@ namespace ConsistencyHost.Engine.Plugins;
 /// name (as <c>dotnet build</c> lays it out); a bare <c>.dll</c> in the folder itself is a plugin too, and
 /// a sub-folder with <c>.cs</c> files but no such assembly is a source plugin, compiled by the host.
 /// Every plugin is vetted against the SDK's banned list before anything of it is loaded. A plugin that is
-/// refused or cannot be loaded is listed with its reason; it never stops the host.
+/// refused or cannot be loaded is listed with its reason; it never stops the host. A plugin folder that others
+/// than the host's user could change does stop it (<see cref="PluginFolderSafety"/>).
 /// </summary>
 public static class PluginDiscovery
 {
@@ -21,6 +23,7 @@ public static class PluginDiscovery
     /// When workers are on: which plugins are trusted, and the executor that describes the others. Untrusted plugins
     /// are then vetted here through their metadata only and never loaded into the host. Null loads every plugin here.
     /// </param>
+    /// <exception cref="Profiles.ProfileConfigurationException">The folder or a plugin in it is writable by others than the host's user.</exception>
     public static IReadOnlyList<RuleDescriptor> Discover(string pluginsPath, string? sourceCacheRoot = null, UntrustedPlugins? untrusted = null)
     {
         if (!Directory.Exists(pluginsPath))
@@ -28,10 +31,12 @@ public static class PluginDiscovery
             return [];
         }
 
+        var candidates = Candidates(pluginsPath).ToList();
+        PluginFolderSafety.Demand(pluginsPath, candidates.Select(c => c.Root));
         var compiler = new SourcePluginCompiler(sourceCacheRoot ?? SourcePluginCompiler.DefaultCacheRoot);
         var found = new List<RuleDescriptor>();
         var described = new List<Task<IReadOnlyList<RuleDescriptor>>>();
-        foreach (var candidate in Candidates(pluginsPath))
+        foreach (var candidate in candidates)
         {
             var vetted = candidate.SourceFolder is { } folder ? CompileSource(folder, compiler) : VetCompiled(candidate.AssemblyPath!, candidate.Vetted);
             if (vetted.Refusal is { } refusal)
@@ -57,13 +62,14 @@ public static class PluginDiscovery
         return RefuseDuplicateIds(found);
     }
 
-    private sealed record Candidate(string? AssemblyPath, string? SourceFolder, IReadOnlyList<string> Vetted);
+    // Root: what the plugin is on disk (the bare assembly, or its sub-folder with everything under it).
+    private sealed record Candidate(string Root, string? AssemblyPath, string? SourceFolder, IReadOnlyList<string> Vetted);
 
     private static IEnumerable<Candidate> Candidates(string pluginsPath)
     {
         foreach (var dll in Directory.EnumerateFiles(pluginsPath, "*.dll").Order(StringComparer.Ordinal))
         {
-            yield return new Candidate(dll, null, [dll]);
+            yield return new Candidate(dll, dll, null, [dll]);
         }
 
         foreach (var folder in Directory.EnumerateDirectories(pluginsPath).Order(StringComparer.Ordinal))
@@ -72,11 +78,11 @@ public static class PluginDiscovery
             if (File.Exists(main))
             {
                 // The plugin's own dependencies run in its context too, so they are vetted with it.
-                yield return new Candidate(main, null, [.. Directory.EnumerateFiles(folder, "*.dll", SearchOption.AllDirectories).Order(StringComparer.Ordinal)]);
+                yield return new Candidate(folder, main, null, [.. Directory.EnumerateFiles(folder, "*.dll", SearchOption.AllDirectories).Order(StringComparer.Ordinal)]);
             }
             else if (SourceFiles.IsSourcePlugin(folder))
             {
-                yield return new Candidate(null, folder, []);
+                yield return new Candidate(folder, null, folder, []);
             }
         }
     }

@@ -5,6 +5,7 @@ using ConsistencyHost.Engine;
 using ConsistencyHost.Engine.Profiles;
 using ConsistencyHost.Isolation;
 using ConsistencyHost.Server.Probes;
+using ConsistencyHost.Server.Access;
 using ConsistencyHost.Server.Services;
 using Microsoft.AspNetCore.Builder;
 using Microsoft.AspNetCore.Hosting;
@@ -15,9 +16,9 @@ using Microsoft.Extensions.Logging;
 namespace ConsistencyHost.Server.Hosting;
 
 /// <summary>
-/// Builds the gRPC host: generic host + Kestrel (gRPC over h2c and JSON over HTTP/1.1, each on its own loopback port), the check service
-/// with JSON transcoding, health, reflection and the OpenAPI description.
-/// The engine (plugins and profiles) is built before the host listens, so a bad profile stops start-up.
+/// Builds the gRPC host: generic host + Kestrel (gRPC over HTTP/2 and JSON over HTTP/1.1, each on its own port), the check service
+/// with JSON transcoding, health, reflection and the OpenAPI description, behind the access gate (TLS, API keys, mTLS).
+/// Access and the engine (plugins and profiles) are read before the host listens, so bad configuration stops start-up.
 /// </summary>
 public static class ServerApp
 {
@@ -34,12 +35,14 @@ public static class ServerApp
         });
         AddOverrides(builder.Configuration, launch);
 
+        var server = ReadServerOptions(builder.Configuration.GetSection("Server"));
+        var address = ParseBindAddress(server.BindAddress);
+        var access = AccessConfiguration.Read(builder.Configuration.GetSection("Server"), address);
         var section = builder.Configuration.GetSection("ConsistencyHost");
         var executor = IsolationConfiguration.CreateExecutor(section.GetSection("Isolation"));
         var engine = CreateEngine(section, executor);
-        var server = ReadServerOptions(builder.Configuration.GetSection("Server"));
         var endpoints = new ServerEndpoints();
-        ConfigureKestrel(builder.WebHost, server, endpoints);
+        builder.WebHost.ConfigureKestrel(kestrel => endpoints.Configure(kestrel, address, server, access));
 
         builder.Services.AddSingleton(engine);
         builder.Services.AddSingleton(new ConcurrencyGateOptions(server.MaxConcurrentCalls, server.QueueLimit));
@@ -64,6 +67,7 @@ public static class ServerApp
         TelemetrySetup.Add(builder);
 
         var app = builder.Build();
+        AccessGate.Use(app, endpoints, access);
         JsonBodyLimit.Use(app, endpoints, server.MaxReceiveMessageBytes);
         if (executor is not null)
         {
@@ -114,6 +118,10 @@ public static class ServerApp
         if (launch.PluginsPath is not null) overrides["ConsistencyHost:PluginsPath"] = Path.GetFullPath(launch.PluginsPath);
         if (launch.Port is { } port) overrides["Server:Port"] = port.ToString(CultureInfo.InvariantCulture);
         if (launch.HttpPort is { } httpPort) overrides["Server:HttpPort"] = httpPort.ToString(CultureInfo.InvariantCulture);
+        if (launch.BindAddress is not null) overrides["Server:BindAddress"] = launch.BindAddress;
+        if (launch.TlsCertificatePath is not null) overrides["Server:Tls:CertificatePath"] = Path.GetFullPath(launch.TlsCertificatePath);
+        if (launch.TlsKeyPath is not null) overrides["Server:Tls:KeyPath"] = Path.GetFullPath(launch.TlsKeyPath);
+        if (launch.ClientCertificateAuthorityPath is not null) overrides["Server:Tls:ClientCertificateAuthorityPath"] = Path.GetFullPath(launch.ClientCertificateAuthorityPath);
         configuration.AddInMemoryCollection(overrides);
     }
 
@@ -136,25 +144,10 @@ public static class ServerApp
             : throw new ProfileConfigurationException([$"Server:MaxEntriesInFlightPerStream: {options.MaxEntriesInFlightPerStream} is not allowed; expected at least 1 entry per stream"]);
     }
 
-    private static void ConfigureKestrel(IWebHostBuilder webHost, ServerOptions server, ServerEndpoints endpoints)
-    {
-        if (!IPAddress.TryParse(server.BindAddress, out var address))
-        {
-            throw new ProfileConfigurationException([$"Server:BindAddress: '{server.BindAddress}' is not an IP address"]);
-        }
-
-        if (!IPAddress.IsLoopback(address))
-        {
-            // Beyond loopback the host needs TLS and client authentication, which this version does not
-            // configure yet; refusing is safer than serving unauthenticated on a network.
-            throw new ProfileConfigurationException([$"Server:BindAddress: '{server.BindAddress}' is not a loopback address; this version serves on loopback only"]);
-        }
-
-        webHost.ConfigureKestrel(kestrel =>
-        {
-            endpoints.Configure(kestrel, address, server);
-        });
-    }
+    // Beyond loopback, AccessConfiguration demands TLS and client authentication.
+    private static IPAddress ParseBindAddress(string text) => IPAddress.TryParse(text, out var address)
+        ? address
+        : throw new ProfileConfigurationException([$"Server:BindAddress: '{text}' is not an IP address"]);
 
     private static void LogEngine(ILogger logger, CheckEngine engine, WorkerRuleExecutor? executor)
     {

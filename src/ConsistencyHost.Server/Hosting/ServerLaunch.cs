@@ -17,4 +17,16 @@ public sealed record ServerLaunch
 
     /// <summary>JSON/HTTP port override; null keeps configuration.</summary>
     public int? HttpPort { get; init; }
+
+    /// <summary>Address to bind (Server:BindAddress); null keeps configuration (loopback by default).</summary>
+    public string? BindAddress { get; init; }
+
+    /// <summary>Server certificate PEM file (Server:Tls:CertificatePath); null keeps configuration.</summary>
+    public string? TlsCertificatePath { get; init; }
+
+    /// <summary>Private key PEM file of that certificate (Server:Tls:KeyPath); null keeps configuration.</summary>
+    public string? TlsKeyPath { get; init; }
+
+    /// <summary>Authority client certificates must chain to (Server:Tls:ClientCertificateAuthorityPath); null keeps configuration.</summary>
+    public string? ClientCertificateAuthorityPath { get; init; }
 }

@@ -47,6 +47,21 @@ public sealed class CSharpClientTests
         Assert.Equal(1, counting.Attempts);
     }
 
+    [Fact]
+    public async Task CheckAsync_ApiKeyOption_IsSentAndAccepted()
+    {
+        var key = new string('c', ConsistencyHost.Server.Access.AccessMessages.MinimumKeyLength);
+        await using var host = await Access.SecuredHost.StartAsync(new { ApiKeys = new Dictionary<string, string> { ["eln-sample"] = key } }, authority: null);
+        using var anonymous = new CheckClient(host.Grpc);
+        using var client = new CheckClient(host.Grpc, CheckClientOptions.Default with { ApiKey = key });
+
+        var refused = await Assert.ThrowsAsync<RpcException>(() => anonymous.CheckAsync(Requests.Complete("AIS-LQ-C003")));
+        var report = await client.CheckAsync(Requests.Complete("AIS-LQ-C004"));
+
+        Assert.Equal(StatusCode.Unauthenticated, refused.StatusCode);
+        Assert.Equal("AIS-LQ-C004", report.EntryId);
+    }
+
     /// <summary>Fails the first calls as a refused connection would (gRPC maps it to UNAVAILABLE), then forwards.</summary>
     private sealed class FailFirstHandler(int failures) : DelegatingHandler(new SocketsHttpHandler())
     {
