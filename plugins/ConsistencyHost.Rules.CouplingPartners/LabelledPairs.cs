@@ -12,6 +12,8 @@ internal static class LabelledPairs
 {
     public static IEnumerable<Finding> Check(Spectrum spectrum, int spectrumIndex, CouplingPartnersOptions options)
     {
+        // Most lists name no partners: then there is nothing to pair and no label index to build.
+        if (!spectrum.Signals.Any(s => s.Couplings.Any(c => c.PartnerLabel is not null))) yield break;
         var labelOf = LabelIndex(spectrum);
         for (var a = 0; a < spectrum.Signals.Count; a++)
         {

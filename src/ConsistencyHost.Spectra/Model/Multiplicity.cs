@@ -10,12 +10,13 @@ namespace ConsistencyHost.Spectra.Model;
 /// </remarks>
 public readonly record struct Multiplicity
 {
-    private readonly int[]? components;
+    private readonly IReadOnlyList<int>? components;
 
     internal Multiplicity(string reported, int[] components, MultiplicityFlags flags, string? secondOrder)
     {
         Reported = reported;
-        this.components = components;
+        // Read-only view: parsed values are shared through ParsedMultiplicities, so no caller may change them.
+        this.components = components.Length == 0 ? [] : Array.AsReadOnly(components);
         Flags = flags;
         SecondOrderLabel = secondOrder;
     }
@@ -61,7 +62,7 @@ public readonly record struct Multiplicity
     public string Canonical => MultiplicityText.Canonical(this);
 
     /// <summary>Reads a reported multiplicity; never throws (unrecognised text gives IsRecognised false).</summary>
-    public static Multiplicity Parse(string? text) => MultiplicityText.Parse(text ?? "");
+    public static Multiplicity Parse(string? text) => ParsedMultiplicities.Get(text ?? "");
 
     /// <summary>Reads a reported multiplicity; false when the text is not one.</summary>
     public static bool TryParse(string? text, out Multiplicity multiplicity)

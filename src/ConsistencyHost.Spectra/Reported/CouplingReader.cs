@@ -33,6 +33,7 @@ internal static class CouplingReader
         var pair = partner is null ? ReadTypeOrIndex(c) : null;
         var start = into.Count;
         ReadValues(c, item, observed, decimalComma, sink, into, pair, bonds);
+        if (partner is null) return;
         for (var i = start; i < into.Count; i++) into[i] = into[i] with { PartnerLabel = partner };
     }
 
@@ -86,7 +87,10 @@ internal static class CouplingReader
     {
         c.SkipSpaces();
         if (c.Current is '=' or ':' or '≈' or '~') c.Pos++;
-        var values = new List<double>();
+        // Most items hold one or two values: a stack buffer, and a list only past eight.
+        Span<double> buffer = stackalloc double[8];
+        List<double>? more = null;
+        var count = 0;
         while (true)
         {
             c.SkipSpaces();
@@ -96,7 +100,9 @@ internal static class CouplingReader
                 sink.Add(item.Offset + at, Fragment(item, at), ReportedTextMessages.ExpectedCouplingValue);
                 return;
             }
-            values.Add(value);
+            if (count < buffer.Length) buffer[count] = value;
+            else (more ??= []).Add(value);
+            count++;
             c.SkipSpaces();
             if (!(c.TryWord("and") || c.TryChar('&') || c.TryChar('/'))) break;
         }
@@ -114,7 +120,9 @@ internal static class CouplingReader
             return;
         }
         var partner = PartnerOf(pair, observed);
-        foreach (var v in values) into.Add(new Coupling(v, null, partner) { BondCount = bonds });
+        foreach (var v in buffer[..Math.Min(count, buffer.Length)]) into.Add(new Coupling(v, null, partner) { BondCount = bonds });
+        if (more is null) return;
+        foreach (var v in more) into.Add(new Coupling(v, null, partner) { BondCount = bonds });
     }
 
     /// <summary>The nucleus coupled to the observed one; null for homonuclear (or unstated in 1H/19F/31P).</summary>

@@ -32,12 +32,14 @@ public static class ReportedTextReader
         var spectra = new List<Spectrum>();
         var hrms = new List<HrmsClaim>();
         ReadAll(new TextCursor(text), sink, options, spectra, hrms);
-        var failed = mode == ReadMode.Strict && sink.Problems.Any(p => p.Severity == ProblemSeverity.Error);
+        // A clean report (the usual case) skips the LINQ over its empty problem list.
+        var clean = sink.Count == 0;
+        var failed = !clean && mode == ReadMode.Strict && sink.Problems.Any(p => p.Severity == ProblemSeverity.Error);
         return new ReportedTextResult
         {
             Spectra = failed ? [] : spectra,
             Hrms = failed ? [] : hrms,
-            Problems = [.. sink.Problems.OrderBy(p => p.Offset)],
+            Problems = clean ? [] : [.. sink.Problems.OrderBy(p => p.Offset)],
         };
     }
 

@@ -1,29 +1,39 @@
 using System.Globalization;
+using System.Runtime.CompilerServices;
 
 namespace ConsistencyHost.Spectra.Reported;
 
 /// <summary>A position in the text with the small scanning steps every reader needs (no regular expressions).</summary>
+/// <remarks>Fields and local copies rather than properties in the loops: every character of a report passes here.</remarks>
 internal sealed class TextCursor(string text)
 {
-    public string Text { get; } = text;
-    public int Pos { get; set; }
+    public readonly string Text = text;
+    public int Pos;
     public bool AtEnd => Pos >= Text.Length;
-    public char Current => Pos < Text.Length ? Text[Pos] : '\0';
+    public char Current => (uint)Pos < (uint)Text.Length ? Text[Pos] : '\0';
     public char PeekAt(int offset) => Pos + offset < Text.Length && Pos + offset >= 0 ? Text[Pos + offset] : '\0';
 
     public void SkipSpaces()
     {
-        while (Pos < Text.Length && IsSpace(Text[Pos])) Pos++;
+        var t = Text;
+        var i = Pos;
+        while (i < t.Length && IsSpace(t[i])) i++;
+        Pos = i;
     }
 
     public void SkipSpacesOnLine()
     {
-        while (Pos < Text.Length && Text[Pos] is ' ' or '\t' or '\u00A0') Pos++;
+        var t = Text;
+        var i = Pos;
+        while (i < t.Length && t[i] is ' ' or '\t' or '\u00A0') i++;
+        Pos = i;
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public static bool IsSpace(char c) => c is ' ' or '\t' or '\r' or '\n' or '\u00A0' or '\u2009' or '\u202F';
     public static bool IsDash(char c) => c is '-' or '–' or '—' or '‒' or '−';
-    public static bool IsDigit(char c) => c is >= '0' and <= '9';
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    public static bool IsDigit(char c) => (uint)(c - '0') <= 9;
 
     /// <summary>True (and advances) when <paramref name="word"/> follows, case-insensitively.</summary>
     public bool TryWord(string word, bool needBoundary = true)
@@ -47,21 +57,22 @@ internal sealed class TextCursor(string text)
     {
         value = 0;
         decimals = 0;
+        var t = Text;
         var start = Pos;
         var i = Pos;
-        var negative = i < Text.Length && (Text[i] == '-' || Text[i] == '−');
+        var negative = i < t.Length && (t[i] == '-' || t[i] == '−');
         if (negative) i++;
         var digitsStart = i;
-        while (i < Text.Length && IsDigit(Text[i])) i++;
+        while (i < t.Length && IsDigit(t[i])) i++;
         if (i == digitsStart) return false;
         var intEnd = i;
-        if (i + 1 < Text.Length && (Text[i] == '.' || (decimalComma && Text[i] == ',')) && IsDigit(Text[i + 1]))
+        if (i + 1 < t.Length && (t[i] == '.' || (decimalComma && t[i] == ',')) && IsDigit(t[i + 1]))
         {
             i++;
-            while (i < Text.Length && IsDigit(Text[i])) i++;
+            while (i < t.Length && IsDigit(t[i])) i++;
             decimals = i - intEnd - 1;
         }
-        value = Decimal(Text.AsSpan(digitsStart, i - digitsStart));
+        value = Decimal(t.AsSpan(digitsStart, i - digitsStart));
         if (negative) value = -value;
         Pos = i;
         return i > start;
