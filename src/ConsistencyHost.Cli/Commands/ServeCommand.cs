@@ -19,11 +19,12 @@ internal static class ServeCommand
         ["--http-port"] = "--http-port",
     };
 
-    public const string Usage = "serve [--port N] [--http-port N] [--plugins DIR] [--config FILE]";
+    public const string Usage = "serve [--port N] [--http-port N] [--echo] [--plugins DIR] [--config FILE]";
 
     public static async Task<int> RunAsync(IReadOnlyList<string> raw, TextWriter stdout)
     {
-        var args = ParsedArguments.Parse(raw, Valued, []);
+        // --echo serves consistencyhost.v1.Diagnostics/Echo for load tests (Server:EnableEcho); off by default.
+        var args = ParsedArguments.Parse(raw, Valued, ["--echo"]);
         var port = ReadPort(args, "--port");
         var httpPort = ReadPort(args, "--http-port");
 
@@ -35,7 +36,7 @@ internal static class ServeCommand
         Microsoft.AspNetCore.Builder.WebApplication app;
         try
         {
-            app = ServerApp.Build(new ServerLaunch { ConfigFile = args.Value("--config"), PluginsPath = args.Value("--plugins"), Port = port, HttpPort = httpPort });
+            app = ServerApp.Build(new ServerLaunch { ConfigFile = args.Value("--config"), PluginsPath = args.Value("--plugins"), Port = port, HttpPort = httpPort, EnableEcho = args.Has("--echo") ? true : null });
         }
         catch (ProfileConfigurationException error)
         {

@@ -68,6 +68,7 @@ public static class ServerApp
         }
 
         app.MapGrpcService<EntryCheckService>();
+        if (server.EnableEcho) app.MapGrpcService<DiagnosticsService>();
         app.MapGrpcHealthChecksService();
         app.MapGrpcReflectionService();
         OpenApiDocument.Map(app);
@@ -92,6 +93,7 @@ public static class ServerApp
         if (launch.PluginsPath is not null) overrides["ConsistencyHost:PluginsPath"] = Path.GetFullPath(launch.PluginsPath);
         if (launch.Port is { } port) overrides["Server:Port"] = port.ToString(CultureInfo.InvariantCulture);
         if (launch.HttpPort is { } httpPort) overrides["Server:HttpPort"] = httpPort.ToString(CultureInfo.InvariantCulture);
+        if (launch.EnableEcho is { } echo) overrides["Server:EnableEcho"] = echo ? "true" : "false";
         configuration.AddInMemoryCollection(overrides);
     }
 
@@ -107,6 +109,7 @@ public static class ServerApp
             MaxSendMessageBytes = section.GetValue("MaxSendMessageBytes", defaults.MaxSendMessageBytes),
             MaxConcurrentCalls = section.GetValue("MaxConcurrentCalls", defaults.MaxConcurrentCalls),
             QueueLimit = section.GetValue("QueueLimit", defaults.QueueLimit),
+            EnableEcho = section.GetValue("EnableEcho", defaults.EnableEcho),
         };
     }
 

@@ -17,4 +17,7 @@ public sealed record ServerLaunch
 
     /// <summary>JSON/HTTP port override; null keeps configuration.</summary>
     public int? HttpPort { get; init; }
+
+    /// <summary>Echo override (<c>serve --echo</c>); null keeps configuration (Server:EnableEcho).</summary>
+    public bool? EnableEcho { get; init; }
 }

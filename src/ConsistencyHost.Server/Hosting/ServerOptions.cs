@@ -31,4 +31,10 @@ public sealed record ServerOptions
 
     /// <summary>Largest reply sent, bytes.</summary>
     public int MaxSendMessageBytes { get; init; } = 16 * 1024 * 1024;
+
+    /// <summary>
+    /// Serves <c>consistencyhost.v1.Diagnostics/Echo</c> (load tests compare it with CheckEntry). Off by default:
+    /// a production host has no use for it, and an endpoint that is not mapped cannot be abused.
+    /// </summary>
+    public bool EnableEcho { get; init; }
 }
