@@ -7,6 +7,7 @@ using ConsistencyHost.Server.Services;
 using Microsoft.AspNetCore.Builder;
 using Microsoft.AspNetCore.Hosting;
 using Microsoft.Extensions.Configuration;
+using Microsoft.Extensions.Configuration.Memory;
 using Microsoft.Extensions.DependencyInjection;
 using Microsoft.Extensions.Diagnostics.HealthChecks;
 
@@ -30,6 +31,7 @@ public static class ServerApp
             Args = [.. launch.Args],
             ContentRootPath = AppContext.BaseDirectory,
         });
+        AddDefaults(builder.Configuration);
         AddOverrides(builder.Configuration, launch);
 
         var section = builder.Configuration.GetSection("ConsistencyHost");
@@ -81,6 +83,18 @@ public static class ServerApp
 
     /// <summary>The started host's endpoints.</summary>
     public static ServerEndpoints Endpoints(WebApplication app) => app.Services.GetRequiredService<ServerEndpoints>();
+
+    /// <summary>
+    /// Defaults below every other configuration source (so any of them overrides): ASP.NET Core's per-request
+    /// lines at Warning, as the ASP.NET Core project template's appsettings.json sets them. At Information it
+    /// writes four entries per call (request start and end, endpoint start and end); under load (docs/load.md)
+    /// that console output cost more CPU than a whole echo call.
+    /// </summary>
+    private static void AddDefaults(ConfigurationManager configuration) =>
+        configuration.Sources.Insert(0, new MemoryConfigurationSource
+        {
+            InitialData = [new("Logging:LogLevel:Microsoft.AspNetCore", "Warning")],
+        });
 
     private static void AddOverrides(ConfigurationManager configuration, ServerLaunch launch)
     {
