@@ -43,21 +43,23 @@ def compare_section(c, host):
         f"{n(c['echoRequestBytes'], 0)} bytes). Throughput is the median over each kind's phases; latencies are "
         "nearest-rank percentiles over all its calls.",
         "",
-        "| call | calls/s | p50 ms | p99 ms | max ms | calls | errors |",
-        "| --- | ---: | ---: | ---: | ---: | ---: | ---: |",
-        f"| Echo | {n(e['callsPerSecond'])} | {n(e['p50Ms'], 2)} | {n(e['p99Ms'], 2)} | {n(e['maxMs'], 1)} | {e['calls']:,} | {e['errors']} |",
-        f"| CheckEntry | {n(k['callsPerSecond'])} | {n(k['p50Ms'], 2)} | {n(k['p99Ms'], 2)} | {n(k['maxMs'], 1)} | {k['calls']:,} | {k['errors']} |",
+        "| call | calls/s | p50 ms | p99 ms | max ms | calls | errors | host CPU ms per call |",
+        "| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: |",
+        f"| Echo | {n(e['callsPerSecond'])} | {n(e['p50Ms'], 2)} | {n(e['p99Ms'], 2)} | {n(e['maxMs'], 1)} | {e['calls']:,} | {e['errors']} | {n(c['echoHostCpuMsPerCall'], 3)} |",
+        f"| CheckEntry | {n(k['callsPerSecond'])} | {n(k['p50Ms'], 2)} | {n(k['p99Ms'], 2)} | {n(k['maxMs'], 1)} | {k['calls']:,} | {k['errors']} | {n(c['checkHostCpuMsPerCall'], 3)} |",
         "",
         f"**Check / echo throughput: {c['checkToEchoThroughputRatio']:.3f}** (target ≥ {t['minCheckToEchoRatio']}, stretch "
         f"{t['stretchCheckToEchoRatio']}: {'met' if c['meetsRatioTarget'] else 'not met'}). Check p99 "
-        f"{n(k['p99Ms'], 2)} ms (target < {t['maxP99Ms']:g} ms: {'met' if c['meetsP99Target'] else 'not met'}).",
+        f"{n(k['p99Ms'], 2)} ms (target < {t['maxP99Ms']:g} ms: {'met' if c['meetsP99Target'] else 'not met'}). "
+        "Host CPU per call is the host process's user + system time during a phase (/proc/PID/stat) divided by its "
+        "calls, median over the phases: unlike calls/s it hardly depends on how much of the machine the host got.",
         "",
-        "| phase | kind | s | calls/s | p50 ms | p99 ms |",
-        "| ---: | --- | ---: | ---: | ---: | ---: |",
+        "| phase | kind | s | calls/s | p50 ms | p99 ms | host CPU ms per call |",
+        "| ---: | --- | ---: | ---: | ---: | ---: | ---: |",
     ]
     for p in c["phases"]:
         f = p["figures"]
-        lines.append(f"| {p['index']} | {p['kind']} | {n(p['seconds'])} | {n(f['callsPerSecond'])} | {n(f['p50Ms'], 2)} | {n(f['p99Ms'], 2)} |")
+        lines.append(f"| {p['index']} | {p['kind']} | {n(p['seconds'])} | {n(f['callsPerSecond'])} | {n(f['p50Ms'], 2)} | {n(f['p99Ms'], 2)} | {n(p['hostCpuMsPerCall'], 3)} |")
     s = c["checkServerTimes"]
     lines += [
         "",
@@ -90,7 +92,8 @@ def soak_section(s, csv_rows):
         "",
         f"CheckEntry at a fixed arrival rate of {n(s['ratePerSecond'], 0)}/s (open loop: calls start on schedule whether "
         f"or not earlier ones returned; latency counts from the scheduled start) for {n(s['elapsedSeconds'], 0)} s on a "
-        f"fresh host; {load_note(s)}. The rate is half the check throughput `compare` measured just before.",
+        f"fresh host after a few seconds of one-at-a-time warm-up (memory is sampled from start-up, latency only after "
+        f"the warm-up); {load_note(s)}. The rate is half the check throughput `compare` measured just before.",
         "",
         "| sent | lost | completed | errors | calls/s | p50 ms | p99 ms | max ms |",
         "| ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |",

@@ -13,7 +13,7 @@ public static class Program
     private const string Usage =
         "usage:\n" +
         "  loadgen compare --target URL [--concurrency 8] [--duration 30s] [--phases 6] [--warmup 3s] [--server-pid PID] [--out FILE]\n" +
-        "  loadgen soak --target URL --rate N/s --server-pid PID [--duration 10m] [--sample-every 5s] [--max-in-flight 1000] [--out FILE] [--csv FILE]\n" +
+        "  loadgen soak --target URL --rate N/s --server-pid PID [--duration 10m] [--sample-every 5s] [--warmup 5s] [--max-in-flight 1000] [--out FILE] [--csv FILE]\n" +
         "  loadgen replicas --targets URL1,URL2,URL3 [--concurrency 8] [--entries 2000] [--server-pids P1,P2,P3] [--out FILE]\n" +
         "every mode: [--call-timeout 10s]\n";
 

@@ -43,7 +43,13 @@ public static class CompareMode
         var times = new ServerTimes();
         kinds[1] = CallKind.Check(channel, workload, times);
         var results = new List<PhaseResult>();
-        for (var i = 0; i < phases; i++) results.Add(await ClosedLoop.ForDurationAsync(kinds[i % 2], concurrency, phaseLength));
+        var cpuMs = new List<double?>();
+        for (var i = 0; i < phases; i++)
+        {
+            var cpuBefore = server?.CpuSeconds();
+            results.Add(await ClosedLoop.ForDurationAsync(kinds[i % 2], concurrency, phaseLength));
+            cpuMs.Add(server?.CpuSeconds() - cpuBefore is { } spent && results[^1].Log.Succeeded > 0 ? CallFigures.Round(spent * 1000 / results[^1].Log.Succeeded) : null);
+        }
 
         var echo = CallFigures.Of(results.Where(r => r.Kind == "echo").ToList());
         var check = CallFigures.Of(results.Where(r => r.Kind == "check").ToList());
@@ -55,10 +61,18 @@ public static class CompareMode
             CallFigures.Round(workload.MeanCheckRequestBytes), CallFigures.Round(workload.MeanEchoRequestBytes),
             echo, check, ratio, times.Figures(), Targets,
             ratio >= Targets.MinCheckToEchoRatio, ratio >= Targets.StretchCheckToEchoRatio, check.P99Ms < Targets.MaxP99Ms,
-            [.. results.Select((r, i) => new PhaseFigures(i, r.Kind, CallFigures.Round(r.Elapsed.TotalSeconds), CallFigures.Of(r)))],
+            HostCpuMs(results, cpuMs, "echo"), HostCpuMs(results, cpuMs, "check"),
+            [.. results.Select((r, i) => new PhaseFigures(i, r.Kind, CallFigures.Round(r.Elapsed.TotalSeconds), CallFigures.Of(r), cpuMs[i]))],
             warmErrors, alive,
             [.. warm.Concat(results).SelectMany(r => r.Log.Messages).Distinct().Take(10)]);
         return new ModeOutcome(summary, echo.Errors + check.Errors + warmErrors == 0 && alive);
+    }
+
+    // Median over the phases of one kind; null without a server pid.
+    private static double? HostCpuMs(List<PhaseResult> results, List<double?> cpuMs, string kind)
+    {
+        var values = results.Select((r, i) => (r.Kind, Ms: cpuMs[i])).Where(p => p.Kind == kind && p.Ms is not null).Select(p => p.Ms!.Value).ToList();
+        return values.Count == 0 ? null : Percentiles.Median(values);
     }
 }
 
@@ -73,7 +87,8 @@ public sealed record CompareTargets(double MinCheckToEchoRatio, double StretchCh
 /// <param name="Kind">"echo" or "check".</param>
 /// <param name="Seconds">Wall time of the phase.</param>
 /// <param name="Figures">Its calls.</param>
-public sealed record PhaseFigures(int Index, string Kind, double Seconds, CallFigures Figures);
+/// <param name="HostCpuMsPerCall">The host's CPU time (user + system) per successful call in this phase, ms; null without --server-pid.</param>
+public sealed record PhaseFigures(int Index, string Kind, double Seconds, CallFigures Figures, double? HostCpuMsPerCall);
 
 /// <summary>The JSON summary of <c>compare</c> (field names are stable; scripts read them).</summary>
 public sealed record CompareSummary(
@@ -81,4 +96,5 @@ public sealed record CompareSummary(
     double CheckRequestBytes, double EchoRequestBytes, CallFigures Echo, CallFigures Check, double CheckToEchoThroughputRatio,
     ServerTimeFigures CheckServerTimes,
     CompareTargets Targets, bool MeetsRatioTarget, bool MeetsStretchRatioTarget, bool MeetsP99Target,
+    double? EchoHostCpuMsPerCall, double? CheckHostCpuMsPerCall,
     IReadOnlyList<PhaseFigures> Phases, int WarmupErrors, bool ServerAlive, IReadOnlyList<string> ErrorMessages);

@@ -12,7 +12,7 @@ namespace ConsistencyHost.LoadGenerator.Modes;
 public static class SoakMode
 {
     /// <summary>Options this mode takes.</summary>
-    public static readonly string[] Options = ["--target", "--rate", "--duration", "--server-pid", "--sample-every", "--max-in-flight", "--call-timeout", "--out", "--csv"];
+    public static readonly string[] Options = ["--target", "--rate", "--duration", "--server-pid", "--sample-every", "--max-in-flight", "--warmup", "--call-timeout", "--out", "--csv"];
 
     /// <summary>Runs the soak.</summary>
     public static async Task<ModeOutcome> RunAsync(Arguments args)
@@ -24,17 +24,21 @@ public static class SoakMode
         if (pids.Count != 1) throw new UsageException("--server-pid: give the host's process id (one), so that its memory can be sampled");
         var every = args.Duration("--sample-every", TimeSpan.FromSeconds(5));
         var maxInFlight = args.Int("--max-in-flight", 1000);
+        var warmup = args.Duration("--warmup", TimeSpan.FromSeconds(5));
         CallKind.CallTimeout = args.Duration("--call-timeout", CallKind.CallTimeout);
 
         var machine = MachineNote.Now();
         using var channel = Channels.To(target);
         var log = new CallLog();
-        var loop = new OpenLoop(CallKind.Check(channel, Workload.FromEntryMix()), rate, maxInFlight);
+        var check = CallKind.Check(channel, Workload.FromEntryMix());
+        var loop = new OpenLoop(check, rate, maxInFlight);
         var sampler = new MemorySampler(new ProcessProbe(pids[0]), channel, every);
         using var died = new CancellationTokenSource();
         using var done = new CancellationTokenSource();
 
         var sampling = sampler.RunAsync(() => log.Succeeded + log.Failed, died, done.Token);
+        // Memory is sampled from start-up on; latency only after a warm-up (one call at a time: JIT, first GC).
+        var warm = await ClosedLoop.ForDurationAsync(check, 1, warmup);
         var result = await loop.RunAsync(duration, log, died.Token);
         await done.CancelAsync();
         await sampling;
@@ -45,8 +49,8 @@ public static class SoakMode
             "soak", target.ToString(), rate, duration.TotalSeconds, CallFigures.Round(result.Elapsed.TotalSeconds), machine, MachineNote.LoadAverage(),
             loop.Sent, loop.Lost, figures, sampler.Samples.Count,
             MemoryCurve.Of(sampler.Samples, s => s.ResidentBytes), MemoryCurve.Of(sampler.Samples, s => s.ManagedHeapBytes),
-            sampler.Samples.LastOrDefault()?.Gen2Collections, !sampler.ServerDied, log.Messages);
-        return new ModeOutcome(summary, figures.Errors == 0 && loop.Lost == 0 && !sampler.ServerDied);
+            sampler.Samples.LastOrDefault()?.Gen2Collections, warm.Log.Failed, !sampler.ServerDied, [.. warm.Log.Messages.Concat(log.Messages)]);
+        return new ModeOutcome(summary, figures.Errors + warm.Log.Failed == 0 && loop.Lost == 0 && !sampler.ServerDied);
     }
 }
 
@@ -54,4 +58,4 @@ public static class SoakMode
 public sealed record SoakSummary(
     string Mode, string Target, double RatePerSecond, double DurationSeconds, double ElapsedSeconds, MachineNote Machine, double? LoadAverage1mAtEnd,
     long Sent, long Lost, CallFigures Check, int MemorySamples, MemoryCurve? Resident, MemoryCurve? ManagedHeap, int? Gen2Collections,
-    bool ServerAlive, IReadOnlyList<string> ErrorMessages);
+    int WarmupErrors, bool ServerAlive, IReadOnlyList<string> ErrorMessages);
