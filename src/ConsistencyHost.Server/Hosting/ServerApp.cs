@@ -86,9 +86,9 @@ public static class ServerApp
 
     /// <summary>
     /// Defaults below every other configuration source (so any of them overrides): ASP.NET Core's per-request
-    /// lines at Warning, as the ASP.NET Core project template's appsettings.json sets them. At Information it
-    /// writes four entries per call (request start and end, endpoint start and end); under load (docs/load.md)
-    /// that console output cost more CPU than a whole echo call.
+    /// lines at Warning, as the ASP.NET Core project template's appsettings.json sets them. At Information they
+    /// are four entries per call (request start and end, endpoint start and end): 140,000 console lines for 17,000
+    /// calls in a 10-second load test, work a production host does not want on every call.
     /// </summary>
     private static void AddDefaults(ConfigurationManager configuration) =>
         configuration.Sources.Insert(0, new MemoryConfigurationSource
