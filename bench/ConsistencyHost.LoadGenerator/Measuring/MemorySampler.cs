@@ -71,6 +71,12 @@ public sealed class MemorySampler(ProcessProbe probe, GrpcChannel channel, TimeS
             _heapAvailable = false;
             return null;
         }
+        catch (RpcException)
+        {
+            // A host at its concurrency limit refuses this call like any other (RESOURCE_EXHAUSTED): the sample
+            // keeps its resident set and goes without the managed heap rather than ending the soak.
+            return null;
+        }
     }
 }
 
