@@ -24,12 +24,13 @@ internal static class ServeCommand
         ["--client-ca"] = "--client-ca",
     };
 
-    public const string Usage = "serve [--port N] [--http-port N] [--bind ADDRESS] [--tls-cert PATH --tls-key PATH] [--client-ca PATH]\n" +
+    public const string Usage = "serve [--port N] [--http-port N] [--bind ADDRESS] [--tls-cert PATH --tls-key PATH] [--client-ca PATH] [--echo]\n" +
         "      [--plugins DIR] [--config FILE]   (API keys: config Server:ApiKeys or env Server__ApiKeys__NAME)";
 
     public static async Task<int> RunAsync(IReadOnlyList<string> raw, TextWriter stdout)
     {
-        var args = ParsedArguments.Parse(raw, Valued, []);
+        // --echo serves consistencyhost.v1.Diagnostics/Echo for load tests (Server:EnableEcho); off by default.
+        var args = ParsedArguments.Parse(raw, Valued, ["--echo"]);
         var port = ReadPort(args, "--port");
         var httpPort = ReadPort(args, "--http-port");
 
@@ -51,6 +52,7 @@ internal static class ServeCommand
                 TlsCertificatePath = args.Value("--tls-cert"),
                 TlsKeyPath = args.Value("--tls-key"),
                 ClientCertificateAuthorityPath = args.Value("--client-ca"),
+                EnableEcho = args.Has("--echo") ? true : null,
             });
         }
         catch (ProfileConfigurationException error)

@@ -29,4 +29,7 @@ public sealed record ServerLaunch
 
     /// <summary>Authority client certificates must chain to (Server:Tls:ClientCertificateAuthorityPath); null keeps configuration.</summary>
     public string? ClientCertificateAuthorityPath { get; init; }
+
+    /// <summary>Echo override (<c>serve --echo</c>); null keeps configuration (Server:EnableEcho).</summary>
+    public bool? EnableEcho { get; init; }
 }

@@ -40,4 +40,10 @@ public sealed record ServerOptions
     /// Two lets the next entry be read while one is checked; more only buffers.
     /// </summary>
     public int MaxEntriesInFlightPerStream { get; init; } = 4;
+
+    /// <summary>
+    /// Serves <c>consistencyhost.v1.Diagnostics/Echo</c> (load tests compare it with CheckEntry). Off by default:
+    /// a production host has no use for it, and an endpoint that is not mapped cannot be abused.
+    /// </summary>
+    public bool EnableEcho { get; init; }
 }
