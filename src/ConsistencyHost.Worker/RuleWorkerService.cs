@@ -2,6 +2,7 @@ using System.Text.Json;
 using ConsistencyHost.Contract.Mapping;
 using ConsistencyHost.Contract.Worker.V1;
 using ConsistencyHost.Engine.Intake;
+using ConsistencyHost.Engine.Running;
 using ConsistencyHost.Engine.Plugins;
 using Grpc.Core;
 
@@ -46,6 +47,8 @@ internal sealed class RuleWorkerService(LoadedPlugin plugin) : RuleWorker.RuleWo
         var entry = _intake.Build(SubmissionMapper.ToSubmission(request.Entry));
         var options = JsonSerializer.Deserialize(request.OptionsJson, rule.OptionsType!)
                       ?? throw new JsonException($"options for '{rule.Id}' deserialised to null");
+        // As in the host: the perception every rule shares is not this rule's work, so it is done before its clock starts.
+        SharedPerception.Prepare(entry);
         using var deadline = CancellationTokenSource.CreateLinkedTokenSource(callToken);
         deadline.CancelAfter(TimeSpan.FromMilliseconds(Math.Max(1, request.DeadlineMs)));
         var response = new RunRuleResponse { Ok = true };
