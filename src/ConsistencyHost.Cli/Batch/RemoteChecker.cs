@@ -4,7 +4,6 @@ using ConsistencyHost.Cli.CommandLine;
 using ConsistencyHost.Contract.Mapping;
 using ConsistencyHost.Contract.V1;
 using ConsistencyHost.Dispatch;
-using Grpc.Core;
 
 namespace ConsistencyHost.Cli.Batch;
 
@@ -49,10 +48,6 @@ internal sealed class RemoteChecker(ReplicaDispatcher dispatcher) : IBatchChecke
         catch (ArgumentException error)
         {
             throw new UsageException($"with --server {error.Message}");
-        }
-        catch (RpcException error) when (error.StatusCode == StatusCode.Unavailable)
-        {
-            throw new UsageException($"--server: {error.Status.Detail}");
         }
     }
 

@@ -62,7 +62,8 @@ internal static class BatchCommand
         {
             // Unreachable (UNAVAILABLE), or TLS could not be set up (INTERNAL from the HTTP layer): often a private CA
             // that this machine does not trust.
-            throw new UsageException($"could not reach the host at {hosts.Description}: {error.Status.Detail} ({error.Status.DebugException?.Message}); for a host with a private CA give --ca-cert PATH");
+            var cause = error.Status.DebugException?.Message is { } message ? $" ({message})" : "";
+            throw new UsageException($"could not reach the host at {hosts.Description}: {error.Status.Detail}{cause}; for an https:// host with a private CA give --ca-cert PATH");
         }
 
         progress.Finish();
