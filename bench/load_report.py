@@ -93,7 +93,7 @@ def soak_section(s, csv_rows):
         f"CheckEntry at a fixed arrival rate of {n(s['ratePerSecond'], 0)}/s (open loop: calls start on schedule whether "
         f"or not earlier ones returned; latency counts from the scheduled start) for {n(s['elapsedSeconds'], 0)} s on a "
         f"fresh host after a few seconds of one-at-a-time warm-up (memory is sampled from start-up, latency only after "
-        f"the warm-up); {load_note(s)}. The rate is half the slowest check phase `compare` measured just before.",
+        f"the warm-up); {load_note(s)}. The rate is a quarter of the slowest check phase `compare` measured just before.",
         "",
         "| sent | lost | completed | errors | calls/s | p50 ms | p99 ms | max ms |",
         "| ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |",
