@@ -24,9 +24,6 @@ public sealed partial class ReadmeWalkthroughTests : IDisposable
     [GeneratedRegex(@"```sh\n(curl -sS -X POST [^`]+?)```", RegexOptions.Singleline)]
     private static partial Regex CurlCheck();
 
-    [GeneratedRegex("```json\\n(.*?)```", RegexOptions.Singleline)]
-    private static partial Regex JsonBlock();
-
     [Fact]
     public async Task Walkthrough_ServeThenCurlFromSamples_ReturnsTheReportWithTheSolventFinding()
     {
@@ -35,7 +32,7 @@ public sealed partial class ReadmeWalkthroughTests : IDisposable
         var curlDoc = await ReadAsync(Path.Combine("samples", "clients", "curl.md"));
         var command = CurlCheck().Match(curlDoc);
         Assert.True(command.Success, "samples/clients/curl.md has no curl POST command");
-        await File.WriteAllTextAsync(Path.Combine(_work, "entry.json"), JsonBlock().Match(curlDoc).Groups[1].Value);
+        await File.WriteAllTextAsync(Path.Combine(_work, "entry.json"), DocBlocks.Json(curlDoc)[0]);
         using var host = await ServeProcess.StartAsync();
 
         // The documented command with the documented port swapped for this host's; run by a shell like a user's.

@@ -37,37 +37,28 @@ internal sealed class ServeProcess : IDisposable
 
         var process = Process.Start(start)!;
         using var timeout = new CancellationTokenSource(TimeSpan.FromMinutes(1));
-        const string Prefix = "listening on ";
-        // The host's console log shares stdout; the address line comes once Kestrel listens.
-        var line = await process.StandardOutput.ReadLineAsync(timeout.Token);
-        while (line is not null && !line.StartsWith(Prefix, StringComparison.Ordinal))
-        {
-            line = await process.StandardOutput.ReadLineAsync(timeout.Token);
-        }
-
-        if (line is null)
-        {
-            process.Kill(entireProcessTree: true);
-            throw new InvalidOperationException("serve ended without listening: " + await process.StandardError.ReadToEndAsync(timeout.Token));
-        }
-
-        const string HttpPrefix = "json over http on ";
-        var httpLine = await process.StandardOutput.ReadLineAsync(timeout.Token);
-        while (httpLine is not null && !httpLine.StartsWith(HttpPrefix, StringComparison.Ordinal))
-        {
-            httpLine = await process.StandardOutput.ReadLineAsync(timeout.Token);
-        }
-
-        if (httpLine is null)
-        {
-            process.Kill(entireProcessTree: true);
-            throw new InvalidOperationException("serve printed no JSON address: " + await process.StandardError.ReadToEndAsync(timeout.Token));
-        }
+        // The host's console log shares stdout; the address lines come once Kestrel listens, gRPC first.
+        var grpc = await ReadAddressAsync(process, "listening on ", timeout.Token);
+        var http = await ReadAddressAsync(process, "json over http on ", timeout.Token);
 
         // Keep draining both pipes so that the host never blocks on a full pipe while logging.
         _ = process.StandardOutput.ReadToEndAsync();
         _ = process.StandardError.ReadToEndAsync();
-        return new ServeProcess(process, new Uri(line[Prefix.Length..]), new Uri(httpLine[HttpPrefix.Length..]));
+        return new ServeProcess(process, grpc, http);
+    }
+
+    /// <summary>Reads stdout up to the line that starts with <paramref name="prefix"/>; the host is killed if it never comes.</summary>
+    private static async Task<Uri> ReadAddressAsync(Process process, string prefix, CancellationToken cancellationToken)
+    {
+        var line = await process.StandardOutput.ReadLineAsync(cancellationToken);
+        while (line is not null && !line.StartsWith(prefix, StringComparison.Ordinal))
+        {
+            line = await process.StandardOutput.ReadLineAsync(cancellationToken);
+        }
+
+        if (line is not null) return new Uri(line[prefix.Length..]);
+        process.Kill(entireProcessTree: true);
+        throw new InvalidOperationException($"serve ended without printing '{prefix}ADDRESS': " + await process.StandardError.ReadToEndAsync(cancellationToken));
     }
 
     /// <summary>Kills the host outright (SIGKILL), as a crashed node or an evicted pod would end.</summary>

@@ -1,6 +1,5 @@
 using System.Net;
 using System.Text;
-using System.Text.RegularExpressions;
 using ConsistencyHost.Server.Access;
 using ConsistencyHost.Tests.Shared;
 using Microsoft.Extensions.Configuration;
@@ -8,13 +7,13 @@ using Microsoft.Extensions.Configuration;
 namespace ConsistencyHost.Server.Tests.Access;
 
 /// <summary>The "Server" snippet of docs/reliability.md's Access section is a configuration the host accepts beyond loopback.</summary>
-public sealed partial class AccessDocTests
+public sealed class AccessDocTests
 {
     [Fact]
     public void ReliabilityDoc_ServerSnippet_StartsBeyondLoopbackOnceItsFilesExist()
     {
         var doc = File.ReadAllText(Path.Combine(RepoPaths.Root, "docs", "reliability.md"));
-        var snippet = Assert.Single(JsonBlock().Matches(doc).Select(m => m.Groups[1].Value), s => s.Contains("\"Server\"", StringComparison.Ordinal));
+        var snippet = Assert.Single(DocBlocks.Json(doc), s => s.Contains("\"Server\"", StringComparison.Ordinal));
         using var pki = TestPki.Create();
         // The documented paths are a deployment's; the test's CA stands in for them.
         snippet = snippet.Replace("/etc/consistencyhost/tls/tls.crt", pki.CertificatePath, StringComparison.Ordinal)
@@ -28,7 +27,4 @@ public sealed partial class AccessDocTests
         Assert.Equal(1, policy.Keys.Count);
         Assert.Equal("eln-prod", policy.Keys.ClientOf(server["ApiKeys:eln-prod"]!));
     }
-
-    [GeneratedRegex("```json\\n(.*?)```", RegexOptions.Singleline)]
-    private static partial Regex JsonBlock();
 }

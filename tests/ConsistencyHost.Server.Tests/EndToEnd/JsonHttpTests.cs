@@ -1,7 +1,6 @@
 using System.Net;
 using System.Text;
 using System.Text.Json;
-using System.Text.RegularExpressions;
 using ConsistencyHost.Contract.V1;
 using ConsistencyHost.Tests.Shared;
 using Google.Protobuf;
@@ -12,7 +11,7 @@ namespace ConsistencyHost.Server.Tests.EndToEnd;
 /// The JSON face of the contract (google.api.http rules, ASP.NET Core JSON transcoding) called with a plain
 /// HttpClient over HTTP/1.1, compared with what gRPC answers for the same request.
 /// </summary>
-public sealed partial class JsonHttpTests
+public sealed class JsonHttpTests
 {
     private static readonly TimeSpan CallTimeout = TimeSpan.FromSeconds(60);
     private static readonly string[] AllRules =
@@ -91,10 +90,10 @@ public sealed partial class JsonHttpTests
         await using var host = await RunningHost.StartAsync(AllRules);
         using var http = NewClient(host);
         var markdown = await File.ReadAllTextAsync(Path.Combine(RepoPaths.Samples, "clients", "curl.md"));
-        var body = JsonBlock().Match(markdown);
-        Assert.True(body.Success, "samples/clients/curl.md has no ```json block");
+        var body = DocBlocks.Json(markdown).FirstOrDefault();
+        Assert.True(body is not null, "samples/clients/curl.md has no ```json block");
 
-        using var reply = await http.PostAsync("/v1/entries:check", Json(body.Groups[1].Value));
+        using var reply = await http.PostAsync("/v1/entries:check", Json(body));
 
         Assert.Equal(HttpStatusCode.OK, reply.StatusCode);
         var report = JsonParser.Default.Parse<CheckEntryResponse>(await reply.Content.ReadAsStringAsync());
@@ -120,7 +119,4 @@ public sealed partial class JsonHttpTests
         foreach (var run in copy.RuleRuns) run.ElapsedMs = 0;
         return copy;
     }
-
-    [GeneratedRegex("```json\\n(.*?)```", RegexOptions.Singleline)]
-    private static partial Regex JsonBlock();
 }

@@ -1,5 +1,4 @@
 using System.Text;
-using System.Text.RegularExpressions;
 using ConsistencyHost.Engine.Profiles;
 using ConsistencyHost.Server.Hosting;
 using ConsistencyHost.Tests.Shared;
@@ -8,14 +7,14 @@ using Microsoft.Extensions.Configuration;
 namespace ConsistencyHost.Server.Tests.Isolation;
 
 /// <summary>Every configuration snippet in docs/reliability.md is read by the host's own configuration readers.</summary>
-public sealed partial class ReliabilityDocTests
+public sealed class ReliabilityDocTests
 {
     [Fact]
     public void ReliabilityDoc_JsonSnippets_AreValidHostConfiguration()
     {
         var doc = File.ReadAllText(Path.Combine(RepoPaths.Root, "docs", "reliability.md"));
         // The "Server" snippet of the Access section is AccessDocTests' to check.
-        var snippets = JsonBlock().Matches(doc).Select(m => m.Groups[1].Value).Where(s => s.Contains("\"ConsistencyHost\"", StringComparison.Ordinal)).ToList();
+        var snippets = DocBlocks.Json(doc).Where(s => s.Contains("\"ConsistencyHost\"", StringComparison.Ordinal)).ToList();
 
         Assert.Equal(2, snippets.Count);
         foreach (var snippet in snippets)
@@ -28,7 +27,4 @@ public sealed partial class ReliabilityDocTests
             Assert.NotEmpty(options.TrustedPlugins);
         }
     }
-
-    [GeneratedRegex("```json\\n(.*?)```", RegexOptions.Singleline)]
-    private static partial Regex JsonBlock();
 }
