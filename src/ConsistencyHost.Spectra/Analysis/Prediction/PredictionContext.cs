@@ -1,0 +1,41 @@
+using ConsistencyHost.Chemistry.Model;
+using ConsistencyHost.Chemistry.Perception.Rings;
+
+namespace ConsistencyHost.Spectra.Analysis.Prediction;
+
+/// <summary>
+/// The perceived structure the shift and coupling predictions read: the molecule with its rings and perceived
+/// aromaticity (independent of the Kekulé form submitted). Built once per molecule and shared.
+/// </summary>
+public sealed class PredictionContext
+{
+    private PredictionContext(Molecule molecule, RingSet rings, Aromaticity aromaticity)
+    {
+        Molecule = molecule;
+        Rings = rings;
+        Aromaticity = aromaticity;
+    }
+
+    /// <summary>The molecule.</summary>
+    public Molecule Molecule { get; }
+
+    /// <summary>Its smallest set of smallest rings.</summary>
+    public RingSet Rings { get; }
+
+    /// <summary>Perceived aromatic atoms and bonds.</summary>
+    public Aromaticity Aromaticity { get; }
+
+    /// <summary>Perceives rings and aromaticity of <paramref name="molecule"/>.</summary>
+    public static PredictionContext Of(Molecule molecule)
+    {
+        ArgumentNullException.ThrowIfNull(molecule);
+        var rings = RingSet.Of(molecule);
+        return new PredictionContext(molecule, rings, Aromaticity.Of(molecule, rings));
+    }
+
+    /// <summary>True when the atom is perceived aromatic.</summary>
+    public bool IsAromatic(int atom) => Aromaticity.AromaticAtoms[atom];
+
+    /// <summary>True when the bond between two bonded atoms is perceived aromatic.</summary>
+    public bool IsAromaticBond(int a, int b) => Aromaticity.AromaticBonds[Molecule.BondBetween(a, b)];
+}
