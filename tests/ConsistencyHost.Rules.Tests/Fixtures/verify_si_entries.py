@@ -3,6 +3,7 @@
 
 Build:  /usr/bin/python3 verify_si_entries.py            (reads published-si-candidates.txt, writes the TSV)
 Check:  /usr/bin/python3 verify_si_entries.py --check    (re-checks every row of the TSV; exit 1 on a failure)
+Report: /usr/bin/python3 verify_si_entries.py --report   (every candidate with each check's finding)
 
 Checks per row, all against RDKit (/usr/bin/python3, Debian python3-rdkit):
   smiles   the SMILES parses;
@@ -39,7 +40,7 @@ H_START = re.compile(r"(?:1\s?H(?:\{[^}]*\})?[\s-]*NMR|\bd\s?H\b|δ\s?H\b|^H NMR
 C_START = re.compile(r"(?:13\s?C(?:\s?\{[^}]*\})?[\s-]*NMR|\bd\s?C\b|δ\s?C\b|\bC NMR)")
 SECTION_END = re.compile(
     r"(?:HRMS|LRMS|\bGC\b|LR-MS|GC-MS|EI-MS|FAB|\bMS\b|m/z|19\s?F|31\s?P|Anal\.|\bIR\b|\bmp\b|Mp\b|\[α\])")
-INTEGRAL = re.compile(r"(?<![\w.])(\d{1,2})\s?(?:arom\.\s)?H(?![\w=])")
+INTEGRAL = re.compile(r"(?<![\w.])(\d{1,2}(?:\.\d+)?)\s?(?:arom\.\s)?H(?![\w=])")
 # Scanned-text misreadings seen in the corpus, undone only for these checks (the row text keeps them).
 OCR_FIXES = [(re.compile(r"\bI\s?H\s?NMR"), "1H NMR"), (re.compile(r"\bBC\s?NMR"), "13C NMR"),
              (re.compile(r"(?<=[\s,(])lH\b"), "1H"), (re.compile("Η"), "H")]
@@ -156,7 +157,8 @@ def h_sum_check(mol, text):
     block = proton_section(text)
     if block is None:
         return True, "no 1H part"
-    reported = sum(int(n) for n in INTEGRAL.findall(block))
+    reported = round(sum(float(n) for n in INTEGRAL.findall(block)), 2)
+    reported = int(reported) if reported == int(reported) else reported
     total = sum(atom.GetTotalNumHs() for atom in mol.GetAtoms())
     if reported == total:
         return True, f"{reported}/{total} H"
@@ -200,6 +202,8 @@ def banned(mol):
 
 def verify(row):
     """Returns (kept, reasons, details) for one row."""
+    if row.get("exclude"):
+        return False, ["excluded on reading"], {"excluded on reading": row["exclude"]}
     mol = Chem.MolFromSmiles(row.get("smiles", ""))
     if mol is None:
         return False, ["smiles"], {"smiles": "does not parse"}
@@ -216,8 +220,9 @@ def verify(row):
     return not reasons, reasons, details
 
 
-SOLVENTS = [("CDCl3", r"CDCl\s?3|chloroform-d|CDCl₃"), ("DMSO-d6", r"DMSO|d6-DMSO"),
-            ("acetone-d6", r"acetone|\(CD3\)2CO"), ("CD3OD", r"CD3OD|methanol-d4|MeOD"),
+SOLVENTS = [("CDCl3", r"CDCl\s?3?\b|chloroform-d|CDCl₃"), ("DMSO-d6", r"DMSO|d6-DMSO"),
+            ("acetone-d6", r"acetone|\(CD3\)2CO|CD3COCD3"), ("CD3OD", r"CD3OD|methanol-d4|MeOD|CH3OH-d4"),
+            ("CD2Cl2", r"CD2Cl2"),
             ("C6D6", r"C6D6|benzene-d6"), ("CD3CN", r"CD3CN"), ("D2O", r"D2O")]
 
 
@@ -262,6 +267,7 @@ def build():
     by_reason = Counter(reason for _, reasons in rejected for reason in reasons)
     detail = "".join(f"\n#   rejected for {reason}: {n} ({', '.join(i for i, r in rejected if reason in r)})"
                      for reason, n in sorted(by_reason.items()))
+    detail += "".join(f"\n#     {row['id']} {row['label']}: {row['exclude']}" for row in candidates if row.get("exclude"))
     solvents = Counter(solvent_of(row["text"]) for row in kept)
     header = HEADER.format(rdkit=rdkit.__version__, candidates=len(candidates), kept=len(kept),
                            rejected=len(rejected), reject_detail=detail,
