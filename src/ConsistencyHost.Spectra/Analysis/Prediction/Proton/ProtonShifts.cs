@@ -1,39 +1,93 @@
-using ConsistencyHost.Chemistry.Model;
+using ConsistencyHost.Spectra.Analysis.Prediction.Proton.Aliphatic;
+using ConsistencyHost.Spectra.Analysis.Prediction.Proton.Aromatic;
+using ConsistencyHost.Spectra.Analysis.Prediction.Proton.Exchangeable;
+using ConsistencyHost.Spectra.Analysis.Prediction.Proton.Olefinic;
+using ConsistencyHost.Spectra.Analysis.Prediction.Proton.Special;
 
 namespace ConsistencyHost.Spectra.Analysis.Prediction.Proton;
 
 /// <summary>
-/// Predicted 1H shift windows for the hydrogens on one heavy atom. This first version gives environment-type
-/// windows only (the coarse layer every finer method falls back to).
+/// Predicted 1H shift windows for the hydrogens attached to one heavy atom, by published increment methods:
+/// Beauchamp–Marquez α/β/γ additivity for sp3 C–H (with tabulated CH3–X, CHX3/CH2X2, acetal and ring cases),
+/// benzene ortho/meta/para increments and heteroaromatic parent positions for aromatic C–H, Pascual–Meier–Simon
+/// increments for vinyl C–H, tables for CHO, CH=N and ≡C–H, and solvent-dependent class ranges for O–H, N–H, S–H.
+/// Anything else gets a wide environment window.
 /// </summary>
-/// <remarks>
-/// Ranges: common practice, as in the chemical-shift charts of organic spectroscopy textbooks (e.g. Pretsch,
-/// Bühlmann, Badertscher, Structure Determination of Organic Compounds, 4th ed., 2009, 1H overview chart; from
-/// memory). Exchangeable protons get the widest windows: their shifts depend on solvent, concentration and
-/// temperature.
-/// </remarks>
+/// <remarks>Each table names its source in its own file under this folder (Aliphatic/, Aromatic/, Olefinic/,
+/// Special/, Exchangeable/). Known limits: no through-space anisotropy beyond the allowances stated (peri groups,
+/// N-acyl azoles, nearby aromatic rings); charged and organometallic systems get environment windows only.</remarks>
 public static class ProtonShifts
 {
-    /// <summary>The window for the hydrogens attached to <paramref name="heavyAtom"/> in <paramref name="solvent"/>.</summary>
+    /// <summary>The window for the hydrogens attached to <paramref name="heavyAtom"/> in <paramref name="solvent"/>
+    /// (a canonical name from <see cref="Model.SolventNames"/>, or null when not given).</summary>
     public static ShiftPrediction Predict(PredictionContext context, int heavyAtom, string? solvent)
     {
         ArgumentNullException.ThrowIfNull(context);
-        var m = context.Molecule;
-        var atom = m.Atoms[heavyAtom];
-        if (atom.AtomicNumber != 6) return Fallback(0.0, 16.0, 5.0, "H on a heteroatom: exchangeable, solvent dependent", ShiftBasis.Exchangeable);
-        if (context.IsAromatic(heavyAtom)) return Fallback(6.0, 9.8, 7.3, "aromatic C–H", ShiftBasis.EnvironmentFallback);
-        foreach (var bond in m.BondsOf(heavyAtom))
+        var atom = context.Molecule.Atoms[heavyAtom];
+        return atom.AtomicNumber switch
         {
-            var b = m.Bonds[bond];
-            var other = m.Atoms[b.Other(heavyAtom)];
-            if (b.Order == 3) return Fallback(1.7, 3.5, 2.5, "alkyne C–H", ShiftBasis.EnvironmentFallback);
-            if (b.Order == 2 && other.AtomicNumber is 8 or 16) return Fallback(7.8, 10.6, 9.8, "formyl C–H", ShiftBasis.EnvironmentFallback);
-            if (b.Order == 2) return Fallback(4.3, 8.2, 5.8, "alkene or imine C–H", ShiftBasis.EnvironmentFallback);
-        }
-
-        return Fallback(0.0, 6.2, 1.5, "sp3 C–H", ShiftBasis.EnvironmentFallback);
+            6 => OnCarbon(context, heavyAtom, solvent),
+            7 or 8 or 16 or 34 => ExchangeableShifts.Predict(context, heavyAtom, solvent),
+            _ => EnvironmentWindows.OnOtherElement(atom.AtomicNumber),
+        };
     }
 
-    private static ShiftPrediction Fallback(double low, double high, double likely, string reason, ShiftBasis basis) =>
-        new(new ShiftWindow(low, high, likely), basis, [reason]);
+    private static ShiftPrediction OnCarbon(PredictionContext context, int carbon, string? solvent)
+    {
+        if (context.IsAromatic(carbon))
+        {
+            return AromaticShifts.Predict(context, carbon, solvent);
+        }
+
+        var m = context.Molecule;
+        if (m.Atoms[carbon].Charge != 0 || m.Atoms[carbon].Radical != 0)
+        {
+            return EnvironmentWindows.UnclassifiedCarbon("charged or radical carbon");
+        }
+
+        var bonds = m.BondsOf(carbon);
+        var neighbours = m.Neighbours(carbon);
+        for (var k = 0; k < bonds.Length; k++)
+        {
+            var order = m.Bonds[bonds[k]].Order;
+            if (order == 1)
+            {
+                continue;
+            }
+
+            return MultipleBond(context, carbon, neighbours[k], order, solvent);
+        }
+
+        return AliphaticShifts.Predict(context, carbon, solvent);
+    }
+
+    private static ShiftPrediction MultipleBond(PredictionContext context, int carbon, int partner, int order, string? solvent)
+    {
+        var element = context.Molecule.Atoms[partner].AtomicNumber;
+        return (order, element) switch
+        {
+            (3, 6) => AlkyneShifts.Predict(context, carbon, partner, solvent),
+            (2, 8 or 16) => FormylShifts.Predict(context, carbon, partner, imine: false, solvent),
+            (2, 7) => FormylShifts.Predict(context, carbon, partner, imine: true, solvent),
+            (2, 6) when IsCumulated(context, partner, carbon) => EnvironmentWindows.Allene(),
+            (2, 6) => AlkeneShifts.Predict(context, carbon, partner, solvent),
+            _ => EnvironmentWindows.UnclassifiedCarbon("C–H on an unusual multiple bond"),
+        };
+    }
+
+    private static bool IsCumulated(PredictionContext context, int atom, int except)
+    {
+        var m = context.Molecule;
+        var bonds = m.BondsOf(atom);
+        var neighbours = m.Neighbours(atom);
+        for (var k = 0; k < bonds.Length; k++)
+        {
+            if (neighbours[k] != except && m.Bonds[bonds[k]].Order == 2)
+            {
+                return true;
+            }
+        }
+
+        return false;
+    }
 }
