@@ -14,7 +14,7 @@ namespace ConsistencyHost.Spectra.Analysis.Prediction.Carbon.Aliphatic;
 ///     Organic Compounds, 7th ed. (2005); used for C(O)R, where the printed P row (22.5, 3.0, −3.0) puts the CH2 of
 ///     2-butanone (36.9) 7.6 ppm too low;
 /// M — from memory: α/β/γ read off textbook shifts of n-butyl and ethyl derivatives (e.g. Et2NH, Et3N, Bu2NH,
-///     Bu3N, N-butylacetamide, butyl phenyl ether, butyl azide); wider windows.
+///     Bu3N, N-butylacetamide, N,N-diethylacetamide, butyl phenyl ether, butyl azide); wider windows.
 /// R — rough (rare groups); much wider windows.
 /// The last value is the extra half-width the row adds when the group is α (half of it when β).
 /// </remarks>
@@ -72,6 +72,7 @@ internal static class AlkaneIncrements
         Set(Group.DialkylAmino, 40.5, 5.0, -4.6, 0, 2.0);         // M
         Set(Group.Ammonium, 30.7, 5.4, -7.2, -1.4, 2.5);          // P (–NR3+)
         Set(Group.Amido, 26.5, 7.0, -5.0, 0, 2.0);                // M
+        Set(Group.DialkylAmido, 34.3, 6.0, -5.0, 0, 2.5);         // M (N,N-diethylacetamide 40/42, N-Boc-piperidine C-2 44.5)
         Set(Group.Sulfonamido, 28.5, 7.0, -5.0, 0, 2.5);          // M
         Set(Group.AzoleNitrogen, 33.0, 8.0, -5.0, 0, 3.0);        // M
         Set(Group.IminoNitrogen, 47.0, 6.0, -5.0, 0, 3.5);        // M

@@ -59,7 +59,7 @@ internal static class FluorinatedCarbons
         var m = context.Molecule;
         if (context.IsAromatic(x))
         {
-            return RingFacts.Of(context).SmallestRingHetero[x] == 0 ? new(124.0, 2.0, "CF3–aryl") : new(121.5, 3.0, "CF3–heteroaryl");
+            return !Aromatic.AromaticFacts.Of(context).RingHasHetero[x] ? new(124.0, 2.0, "CF3–aryl") : new(121.5, 3.0, "CF3–heteroaryl");
         }
 
         if (Topology.IsCarbonylCarbon(m, x))

@@ -40,7 +40,7 @@ internal static class MethylCarbons
             Group.Aryloxy => MethylHetero.ArylEther(context, carbon, x),
             Group.Acyloxy => MethylHetero.EsterOxygen(context, carbon, x),
             Group.Amino or Group.AlkylAmino or Group.DialkylAmino => MethylHetero.Amine(context, carbon, x),
-            Group.Amido => MethylHetero.AmideNitrogen(context, carbon, x),
+            Group.Amido or Group.DialkylAmido => MethylHetero.AmideNitrogen(context, carbon, x),
             Group.Sulfonamido => new(33.5, 5.0, "CH3–N–SO2"),
             Group.AzoleNitrogen => context.Molecule.Atoms[x].Charge > 0 ? new(42.0, 8.0, "CH3–N⁺(aromatic)") : new(34.0, 6.5, "CH3–N(azole)"),
             Group.Ammonium => new(52.0, 4.5, "CH3–N⁺"),

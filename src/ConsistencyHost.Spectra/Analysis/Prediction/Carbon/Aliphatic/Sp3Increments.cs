@@ -24,6 +24,7 @@ internal static class Sp3Increments
         var estimate = new CarbonEstimate().Base("base", -2.3);
         var tally = Walk(context, carbon, estimate);
         AddSteric(context, carbon, estimate);
+        Sp3Corrections.Add(context, carbon, estimate);
         var rings = RingFacts.Of(context);
         var size = rings.SmallestSize[carbon];
         estimate.AddNonZero(RingCorrections.Label(size), RingCorrections.Of(size, rings.SmallestRingHetero[carbon]));
@@ -70,6 +71,13 @@ internal static class Sp3Increments
                 var group = GroupClassifier.Classify(context, atom, next);
                 estimate.AddNonZero(AlkaneIncrements.Label(group, position), AlkaneIncrements.Value(group, position));
                 tally.Add(group, position);
+                if (position == 1 && group == Group.Aryl && Aromatic.AromaticFacts.Of(context).IsFiveRingHeteroaryl(next))
+                {
+                    // Five-membered heteroaryls shield their α carbon: 2-ethylthiophene CH2 23.5, 2-ethylfuran 21.4,
+                    // 3-methylindole CH3 9.7 against ethylbenzene 28.9 and toluene 21.3 (from memory).
+                    estimate.Add("α-5-ring heteroaryl", -6.5);
+                    estimate.Widen(2.5);
+                }
             }
         }
 
@@ -97,7 +105,8 @@ internal static class Sp3Increments
         estimate.Widen(2.0 + 0.5 * context.Molecule.Degree(carbon) + tally.Spread);
         if (rings.SmallestSize[carbon] > 0)
         {
-            estimate.Widen(rings.RingCount[carbon] > 1 ? 2.5 : 1.5);
+            var heteroFiveRing = rings.SmallestSize[carbon] == 5 && rings.SmallestRingHetero[carbon] != 0;
+            estimate.Widen(rings.RingCount[carbon] > 1 ? 2.5 : heteroFiveRing ? 2.5 : 1.5);
         }
 
         if (context.Molecule.Degree(carbon) >= 3 && tally.AlphaGroups > 0)
@@ -123,6 +132,11 @@ internal static class Sp3Increments
             else if (position == 2)
             {
                 Spread += AlkaneIncrements.Spread(group) / 2;
+            }
+            else if (position == 3)
+            {
+                // γ effects depend on conformation (gauche or anti).
+                Spread += 0.5;
             }
         }
     }

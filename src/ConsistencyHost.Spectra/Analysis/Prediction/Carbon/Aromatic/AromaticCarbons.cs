@@ -7,11 +7,12 @@ namespace ConsistencyHost.Spectra.Analysis.Prediction.Carbon.Aromatic;
 /// local rule) plus benzene substituent increments for every substituent on a ring that holds the carbon.
 /// </summary>
 /// <remarks>
-/// Increments pass to heteroaromatic rings scaled as Paudler and Jovanovic found for substituent effects in
-/// heteroaromatics against benzene (Org. Magn. Reson. 1982, 19, 192; abstract read: thiophene 1.35, furan 1.31,
-/// pyridine 0.89): five-membered rings ×1.3, rings with N ×0.9. A heteroatom substituent on a carbon next to ring
-/// nitrogen shifts that carbon about half as much as on benzene (2-methoxypyridine C-2 164.0 against pyridine 149.9:
-/// +14 for +31.4 on benzene; from memory).
+/// Increments pass to six-membered heteroaromatic rings scaled by 0.9, as Paudler and Jovanovic found for pyridine
+/// against benzene (Org. Magn. Reson. 1982, 19, 192; abstract read: pyridine 0.89, thiophene 1.35, furan 1.31).
+/// Their five-membered-ring ratios hold for some positions only (2-phenylfuran C-2 +11 against +13 on benzene,
+/// 2-methylfuran C-3 −3.7 against +0.7; from memory), so five-membered rings take the benzene values unscaled with
+/// twice the proportional error. A heteroatom substituent on a carbon next to ring nitrogen shifts that carbon about
+/// half as much as on benzene (2-methoxypyridine C-2 164.0 against pyridine 149.9: +14 for +31.4; from memory).
 /// </remarks>
 internal static class AromaticCarbons
 {
@@ -23,6 +24,7 @@ internal static class AromaticCarbons
         var facts = AromaticFacts.Of(context);
         var estimate = Parent(context, carbon, facts, out var basis);
         var count = AromaticSubstituentSum.Add(context, carbon, estimate);
+        RingNitrogenSubstituents.Widen(context, carbon, estimate);
         if (Topology.CountNeighbours(context.Molecule, carbon, 9) > 0)
         {
             estimate.Widen("C–F doublet lines", JcfDoubletLines);

@@ -1,4 +1,5 @@
 using ConsistencyHost.Spectra.Analysis.Prediction.Carbon.Core;
+using ConsistencyHost.Spectra.Analysis.Prediction.Carbon.Groups;
 
 namespace ConsistencyHost.Spectra.Analysis.Prediction.Carbon.Aromatic;
 
@@ -22,7 +23,8 @@ internal static class AromaticSubstituentSum
         Span<int> distances = stackalloc int[MaxRingAtoms];
         Span<double> scales = stackalloc double[MaxRingAtoms];
         Span<bool> heteroPara = stackalloc bool[MaxRingAtoms];
-        var n = CollectRingAtoms(context, carbon, atoms, distances, scales, heteroPara);
+        Span<bool> fiveRing = stackalloc bool[MaxRingAtoms];
+        var n = CollectRingAtoms(context, carbon, atoms, distances, scales, heteroPara, fiveRing);
         var count = 0;
         var m = context.Molecule;
         for (var i = 0; i < n; i++)
@@ -38,31 +40,46 @@ internal static class AromaticSubstituentSum
                     continue;
                 }
 
+                if (m.Atoms[s].AtomicNumber != Topology.Carbon)
+                {
+                    continue; // substituents on ring nitrogen: see RingNitrogenSubstituents
+                }
+
+                count++;
                 var row = RingSubstituents.Of(context, s, x);
                 var d = distances[i] == 2 && heteroPara[i] ? 3 : distances[i];
-                var scale = scales[i] * (d == 0 ? IpsoScale(context, carbon, x) : 1.0);
+                var five = fiveRing[i];
+                var scale = scales[i] * (d == 0 ? IpsoScale(context, carbon, x) : d == 1 ? FusedOrthoScale(context, carbon, s) : 1.0);
+                var spread = d == 0 ? row.Spread : row.Spread / 2;
                 var value = row.At(d) * scale;
+                if (five && d == 1 && IsAcceptor(context, s, x))
+                {
+                    // π-acceptors on five-membered heteroarenes deshield the next ring carbon strongly: thiophene-
+                    // 2-carbaldehyde C-3 136.4, 2-acetylthiophene 132.4, furfural C-3 121.1 (from memory).
+                    value = 6.0;
+                    spread = 3.5;
+                }
+
                 estimate.Add(row.LabelAt(d), value);
-                estimate.Widen(0.3 + 0.12 * Math.Abs(value) + (d == 0 ? row.Spread : row.Spread / 2));
-                count++;
+                var proportional = five || (d == 1 && scale != 1.0 && !five) ? 0.25 : 0.12;
+                estimate.Widen(0.3 + proportional * Math.Abs(value) + spread);
             }
         }
 
         estimate.Widen(Crowding(context, carbon));
+        OrthoDonors.Apply(context, carbon, estimate);
         return count;
     }
 
     /// <summary>Ring atoms sharing a ring with <paramref name="carbon"/>, each once at its shortest ring distance.</summary>
-    private static int CollectRingAtoms(PredictionContext context, int carbon, Span<int> atoms, Span<int> distances, Span<double> scales, Span<bool> heteroPara)
+    private static int CollectRingAtoms(PredictionContext context, int carbon, Span<int> atoms, Span<int> distances, Span<double> scales,
+        Span<bool> heteroPara, Span<bool> fiveRing)
     {
         var n = 0;
-        foreach (var ring in context.Rings.Rings)
+        foreach (var r in AromaticFacts.Of(context).AromaticRingsOf[carbon])
         {
+            var ring = context.Rings.Rings[r];
             var at = ring.IndexOf(carbon);
-            if (at < 0 || !AllAromatic(context, ring))
-            {
-                continue;
-            }
 
             var scale = RingScale(context, ring);
             for (var k = 0; k < ring.Length; k++)
@@ -85,11 +102,52 @@ internal static class AromaticSubstituentSum
                 distances[n] = d;
                 scales[n] = scale;
                 heteroPara[n] = ring.Length == 5 && d == 2 && MiddleIsHetero(context, ring, at, forward);
+                fiveRing[n] = ring.Length == 5;
                 n++;
             }
         }
 
         return n;
+    }
+
+    private static bool IsAcceptor(PredictionContext context, int ringAtom, int x) =>
+        GroupClassifier.Classify(context, ringAtom, x) is Group.Acyl or Group.Formyl or Group.Ester or Group.Amide
+            or Group.CarboxylicAcid or Group.Nitrile or Group.Nitro;
+
+    /// <summary>
+    /// In fused six-membered rings an ortho effect follows the bond order (naphthalene C1–C2 high, C2–C3 low):
+    /// 2-naphthol C-1 109.5 (−18.5 from 128.0), C-3 117.7 (−8.2 from 125.9); 1-naphthol C-2 108.7, C-8a 124.4, against
+    /// −12.8 on benzene (from memory): ×1.4 across an α–β bond, ×0.65 across β–β, ×0.7 to or from a fusion carbon.
+    /// </summary>
+    private static double FusedOrthoScale(PredictionContext context, int carbon, int substituted)
+    {
+        var facts = AromaticFacts.Of(context);
+        if (facts.SystemSize[carbon] < 10 || facts.RingSize[carbon] != 6)
+        {
+            return 1.0;
+        }
+
+        if (IsFusion(context, carbon) || IsFusion(context, substituted))
+        {
+            return 0.7;
+        }
+
+        return NextToFusion(context, carbon) || NextToFusion(context, substituted) ? 1.4 : 0.65;
+    }
+
+    private static bool IsFusion(PredictionContext context, int atom) => RingFacts.Of(context).RingCount[atom] >= 2;
+
+    private static bool NextToFusion(PredictionContext context, int atom)
+    {
+        foreach (var x in context.Molecule.Neighbours(atom))
+        {
+            if (context.IsAromatic(x) && context.IsAromaticBond(atom, x) && IsFusion(context, x))
+            {
+                return true;
+            }
+        }
+
+        return false;
     }
 
     private static bool MiddleIsHetero(PredictionContext context, System.Collections.Immutable.ImmutableArray<int> ring, int at, int forward)
@@ -98,24 +156,11 @@ internal static class AromaticSubstituentSum
         return context.Molecule.Atoms[middle].AtomicNumber != Topology.Carbon;
     }
 
-    private static bool AllAromatic(PredictionContext context, System.Collections.Immutable.ImmutableArray<int> ring)
-    {
-        foreach (var a in ring)
-        {
-            if (!context.IsAromatic(a))
-            {
-                return false;
-            }
-        }
-
-        return true;
-    }
-
     private static double RingScale(PredictionContext context, System.Collections.Immutable.ImmutableArray<int> ring)
     {
         if (ring.Length == 5)
         {
-            return 1.3;
+            return 1.0;
         }
 
         foreach (var a in ring)
@@ -139,7 +184,7 @@ internal static class AromaticSubstituentSum
 
         foreach (var x in m.Neighbours(carbon))
         {
-            if (context.IsAromatic(x) && m.Atoms[x].AtomicNumber != Topology.Carbon)
+            if (context.IsAromatic(x) && context.IsAromaticBond(carbon, x) && m.Atoms[x].AtomicNumber != Topology.Carbon)
             {
                 return 0.5;
             }

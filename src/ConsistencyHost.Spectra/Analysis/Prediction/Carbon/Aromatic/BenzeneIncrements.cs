@@ -10,8 +10,14 @@ namespace ConsistencyHost.Spectra.Analysis.Prediction.Carbon.Aromatic;
 /// anisole 159.9/114.1/129.5/120.7, phenol 155.4/115.7/129.9/121.1, aniline 146.7/115.1/129.3/118.5,
 /// nitrobenzene 148.3/123.5/129.4/134.7, benzonitrile 112.4/132.1/129.1/132.8, acetophenone 137.1/128.3/128.6/133.1,
 /// methyl benzoate 130.2/129.6/128.4/132.9, fluorobenzene 163.3/115.6/129.9/124.0, chlorobenzene 134.7/128.9/129.8/
-/// 126.6, bromobenzene 122.6/131.6/130.0/126.9, iodobenzene 94.4/137.4/130.1/127.4. Rows marked (family) stand for
-/// several related substituents and carry a spread.
+/// 126.6, bromobenzene 122.6/131.6/130.0/126.9, iodobenzene 94.4/137.4/130.1/127.4, methyl phenylacetate
+/// 134.0/129.3/128.6/127.1 and benzyl cyanide 129.9/127.9/129.1/127.9 (CH2C(=X)), diphenylmethane 141.1/128.9/128.5/
+/// 126.1 (CH2Ar), 2-phenylfuran 130.9/123.9/128.7/127.4 and 2-phenylthiophene 134.4/126.0/128.9/127.5 (5-ring
+/// heteroaryl), benzyl methyl ether 138.3/127.6/128.3/127.5, benzyl acetate 136.0/128.3/128.6/128.3, benzylamine
+/// 143.3/127.1/128.5/126.8, N-alkylbenzylamines 140.4/128.1/128.4/126.9, N-benzylacetamide 138.3/127.8/128.7/127.5. A branched
+/// benzylic carbon adds to ipso and takes from ortho as the alkyl rows do (ethyl → isopropyl → tert-butyl:
+/// +4.5/−1.5, +6.6/−2.9): 1-phenylethanol C-1 145.8. Each row carries a spread for its own uncertainty and for the
+/// family it stands for.
 /// </remarks>
 internal static class BenzeneIncrements
 {
@@ -21,12 +27,19 @@ internal static class BenzeneIncrements
     public static readonly RingIncrement PrimaryAlkyl = new(15.6, -0.5, 0.0, -2.6, "CH2R", 0.5);
     public static readonly RingIncrement SecondaryAlkyl = new(20.1, -2.0, 0.0, -2.5, "CHR2", 0.8);
     public static readonly RingIncrement TertiaryAlkyl = new(22.2, -3.4, -0.4, -3.1, "CR3", 0.8);
-    public static readonly RingIncrement OxyMethyl = new(12.4, -1.2, 0.2, -1.1, "CH2O", 1.0);
-    public static readonly RingIncrement AminoMethyl = new(15.0, -1.4, -0.2, -2.0, "CH2N", 1.0);
+    public static readonly RingIncrement OxyMethyl = new(12.4, -1.2, 0.2, -1.1, "CH2OH", 1.0);
+    public static readonly RingIncrement EtherMethyl = new(9.8, -0.9, -0.2, -1.0, "CH2OR", 1.0);
+    public static readonly RingIncrement EsterMethyl = new(7.5, -0.2, 0.1, -0.2, "CH2OC(O)", 1.0);
+    public static readonly RingIncrement AminoMethyl = new(14.8, -1.4, -0.2, -2.0, "CH2NH2", 1.0);
+    public static readonly RingIncrement AlkylAminoMethyl = new(11.9, -0.4, -0.1, -1.6, "CH2NR", 1.5);
+    public static readonly RingIncrement AmidoMethyl = new(9.8, -0.7, 0.2, -1.0, "CH2NC(O)", 1.5);
     public static readonly RingIncrement HaloMethyl = new(9.1, 0.0, 0.2, -0.2, "CH2X", 1.0);
+    public static readonly RingIncrement AcylMethyl = new(5.5, 0.8, 0.1, -1.4, "CH2C(=X)", 2.5);
+    public static readonly RingIncrement ArylMethyl = new(12.4, 0.4, 0.0, -2.4, "CH2Ar", 1.0);
     public static readonly RingIncrement Trifluoromethyl = new(2.6, -3.1, 0.4, 3.4, "CF3", 0.5);
-    public static readonly RingIncrement Aryl = new(13.0, -1.1, 0.5, -1.0, "aryl", 1.0);
-    public static readonly RingIncrement Vinyl = new(9.1, -2.4, 0.2, -0.5, "vinyl", 1.0);
+    public static readonly RingIncrement Aryl = new(13.0, -1.1, 0.5, -1.0, "aryl", 1.5);
+    public static readonly RingIncrement FiveRingHeteroaryl = new(4.5, -3.5, 0.3, -1.2, "5-ring heteroaryl", 3.0);
+    public static readonly RingIncrement Vinyl = new(9.1, -2.4, 0.2, -0.5, "vinyl", 2.0);
     public static readonly RingIncrement Alkynyl = new(-6.2, 3.6, -0.4, -0.3, "alkynyl", 0.8);
     public static readonly RingIncrement Fluoro = new(34.8, -12.9, 1.4, -4.5, "F", 0.5);
     public static readonly RingIncrement Chloro = new(6.2, 0.4, 1.3, -1.9, "Cl", 0.5);
@@ -67,4 +80,15 @@ internal static class BenzeneIncrements
     public static readonly RingIncrement Boryl = new(0.0, 6.3, -0.8, 2.7, "B(OR)2", 4.0);
     public static readonly RingIncrement Phosphorus = new(6.0, 4.2, 0.0, 2.0, "P", 3.0);
     public static readonly RingIncrement Other = new(5.0, 0.0, 0.0, 0.0, "other", 6.0);
+
+    private static readonly Dictionary<RingIncrement, (RingIncrement Secondary, RingIncrement Tertiary)> BranchedRows =
+        new[] { OxyMethyl, EtherMethyl, EsterMethyl, AminoMethyl, AlkylAminoMethyl, AmidoMethyl, HaloMethyl, AcylMethyl, ArylMethyl }
+            .ToDictionary(r => r, r => (
+                r with { Ipso = r.Ipso + 4.5, Ortho = r.Ortho - 1.5, Spread = r.Spread + 1.0 },
+                r with { Ipso = r.Ipso + 6.6, Ortho = r.Ortho - 2.9, Spread = r.Spread + 1.5 }));
+
+    /// <summary>The row for a benzylic CH (one more substituent) or C (two or more) of a CH2X row.</summary>
+    public static RingIncrement Branched(RingIncrement row, int extraSubstituents) =>
+        extraSubstituents <= 0 || !BranchedRows.TryGetValue(row, out var pair) ? row
+        : extraSubstituents == 1 ? pair.Secondary : pair.Tertiary;
 }

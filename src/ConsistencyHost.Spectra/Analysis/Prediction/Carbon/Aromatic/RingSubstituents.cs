@@ -15,7 +15,7 @@ internal static class RingSubstituents
         {
             Group.Alkyl => AlkylRow(context, ring, x),
             Group.Trifluoromethyl => BenzeneIncrements.Trifluoromethyl,
-            Group.Aryl => BenzeneIncrements.Aryl,
+            Group.Aryl => AromaticFacts.Of(context).IsFiveRingHeteroaryl(x) ? BenzeneIncrements.FiveRingHeteroaryl : BenzeneIncrements.Aryl,
             Group.Vinyl => BenzeneIncrements.Vinyl,
             Group.Alkynyl => BenzeneIncrements.Alkynyl,
             Group.Formyl => BenzeneIncrements.Formyl,
@@ -36,7 +36,8 @@ internal static class RingSubstituents
             Group.Amino => BenzeneIncrements.Amino,
             Group.AlkylAmino => BenzeneIncrements.AlkylAmino,
             Group.DialkylAmino => BenzeneIncrements.DialkylAmino,
-            Group.Amido => m.Atoms[x].HydrogenCount > 0 ? BenzeneIncrements.Acetamido : BenzeneIncrements.TertiaryAmido,
+            Group.Amido => BenzeneIncrements.Acetamido,
+            Group.DialkylAmido => BenzeneIncrements.TertiaryAmido,
             Group.Sulfonamido => BenzeneIncrements.Sulfonamido,
             Group.AzoleNitrogen => BenzeneIncrements.AzoleNitrogen,
             Group.IminoNitrogen => BenzeneIncrements.Imino,
@@ -66,7 +67,8 @@ internal static class RingSubstituents
             return BenzeneIncrements.Methyl;
         }
 
-        var carbons = 0;
+        RingIncrement? functional = null;
+        var others = 0;
         foreach (var y in m.Neighbours(x))
         {
             if (y == ring)
@@ -74,26 +76,39 @@ internal static class RingSubstituents
                 continue;
             }
 
-            var z = m.Atoms[y].AtomicNumber;
-            if (z == Topology.Oxygen)
-            {
-                return BenzeneIncrements.OxyMethyl;
-            }
-
-            if (z == Topology.Nitrogen)
-            {
-                return BenzeneIncrements.AminoMethyl;
-            }
-
-            if (Topology.IsHalogen(z) || z == Topology.Sulfur)
-            {
-                return BenzeneIncrements.HaloMethyl;
-            }
-
-            carbons++;
+            others++;
+            functional ??= FunctionalRow(context, x, y);
         }
 
-        return carbons switch { <= 1 => BenzeneIncrements.PrimaryAlkyl, 2 => BenzeneIncrements.SecondaryAlkyl, _ => BenzeneIncrements.TertiaryAlkyl };
+        return functional is { } row ? BenzeneIncrements.Branched(row, others - 1)
+            : others switch { <= 1 => BenzeneIncrements.PrimaryAlkyl, 2 => BenzeneIncrements.SecondaryAlkyl, _ => BenzeneIncrements.TertiaryAlkyl };
+    }
+
+    /// <summary>The CH2X row when benzylic neighbour <paramref name="y"/> is a heteroatom or an unsaturated carbon; else null.</summary>
+    private static RingIncrement? FunctionalRow(PredictionContext context, int benzylic, int y)
+    {
+        var m = context.Molecule;
+        var z = m.Atoms[y].AtomicNumber;
+        return z switch
+        {
+            Topology.Oxygen => GroupClassifier.Classify(context, benzylic, y) switch
+            {
+                Group.Hydroxy or Group.Alkoxide or Group.Silyloxy => BenzeneIncrements.OxyMethyl,
+                Group.Acyloxy or Group.Sulfonyloxy => BenzeneIncrements.EsterMethyl,
+                _ => BenzeneIncrements.EtherMethyl,
+            },
+            Topology.Nitrogen => GroupClassifier.Classify(context, benzylic, y) switch
+            {
+                Group.Amino => BenzeneIncrements.AminoMethyl,
+                Group.AlkylAmino or Group.DialkylAmino or Group.Ammonium => BenzeneIncrements.AlkylAminoMethyl,
+                _ => BenzeneIncrements.AmidoMethyl,
+            },
+            Topology.Sulfur or 9 or 17 or 35 or 53 => BenzeneIncrements.HaloMethyl,
+            Topology.Carbon when Topology.IsSp3Carbon(context, y) => null,
+            Topology.Carbon => context.IsAromatic(y) || Topology.PartnerByOrder(m, y, 2, Topology.Carbon) >= 0
+                ? BenzeneIncrements.ArylMethyl : BenzeneIncrements.AcylMethyl,
+            _ => null,
+        };
     }
 
     private static RingIncrement SulfonylRow(Chemistry.Model.Molecule m, int ring, int sulfur)

@@ -15,8 +15,19 @@ namespace ConsistencyHost.Spectra.Analysis.Prediction.Carbon.Aromatic;
 /// </remarks>
 internal static class RingTemplates
 {
-    /// <summary>All usable templates.</summary>
-    public static readonly RingTemplate[] All = Build();
+    /// <summary>Every template as written.</summary>
+    public static readonly RingTemplate[] Defined = Build();
+
+    /// <summary>The templates that can match (perceived as one aromatic system); a test holds this equal to <see cref="Defined"/>.</summary>
+    public static readonly RingTemplate[] All = Array.FindAll(Defined, t => t.IsUsable);
+
+    private static readonly Dictionary<(int, ulong), RingTemplate[]> BySignature = All
+        .GroupBy(t => (t.Atoms.Length, t.Signature))
+        .ToDictionary(g => g.Key, g => g.ToArray());
+
+    /// <summary>The templates with <paramref name="size"/> ring-system atoms and these kind counts (often none).</summary>
+    public static RingTemplate[] Candidates(int size, ulong signature) =>
+        BySignature.TryGetValue((size, signature), out var found) ? found : [];
 
     private static RingTemplate[] Build()
     {
@@ -56,20 +67,20 @@ internal static class RingTemplates
             new("uracil", RingKind.Oxo, 1.5, "O=[c:4]1[cH:5][cH:6][nH:1][c:2](=O)[nH:3]1", [(4, 164.4), (5, 100.5), (6, 142.3), (2, 151.6)]),
             .. Fused(),
         ];
-        return Array.FindAll(all, t => t.IsUsable);
+        return all;
     }
 
     private static RingTemplate[] Fused() =>
     [
-        new("naphthalene", RingKind.Benzenoid, 0.5, "[cH:1]1[cH:2][cH:2][cH:1][c:40]2[cH:1][cH:2][cH:2][cH:1][c:40]12",
+        new("naphthalene", RingKind.Benzenoid, 1.5, "[cH:1]1[cH:2][cH:2][cH:1][c:40]2[cH:1][cH:2][cH:2][cH:1][c:40]12",
             [(1, 128.0), (2, 125.9), (40, 133.6)]),
         new("anthracene", RingKind.Benzenoid, 1.0, "[cH:1]1[cH:2][cH:2][cH:1][c:40]2[cH:9][c:40]3[cH:1][cH:2][cH:2][cH:1][c:40]3[cH:9][c:40]12",
             [(1, 128.1), (2, 125.3), (9, 126.2), (40, 131.7)]),
         new("phenanthrene", RingKind.Benzenoid, 1.0, "[cH:1]1[cH:2][cH:3][cH:4][c:40]2[c:40]3[cH:4][cH:3][cH:2][cH:1][c:100]3[cH:9][cH:9][c:100]12",
             [(1, 128.5), (2, 126.5), (3, 126.5), (4, 122.6), (40, 130.3), (100, 132.0), (9, 126.9)]),
-        new("quinoline", RingKind.Azine, 1.0, "[n:1]1[cH:2][cH:3][cH:4][c:40]2[cH:5][cH:6][cH:7][cH:8][c:80]12",
+        new("quinoline", RingKind.Azine, 1.5, "[n:1]1[cH:2][cH:3][cH:4][c:40]2[cH:5][cH:6][cH:7][cH:8][c:80]12",
             [(2, 150.3), (3, 121.1), (4, 136.0), (40, 128.3), (5, 127.8), (6, 126.5), (7, 129.4), (8, 129.4), (80, 148.3)]),
-        new("isoquinoline", RingKind.Azine, 1.0, "[cH:1]1[n:2][cH:3][cH:4][c:40]2[cH:5][cH:6][cH:7][cH:8][c:80]12",
+        new("isoquinoline", RingKind.Azine, 1.5, "[cH:1]1[n:2][cH:3][cH:4][c:40]2[cH:5][cH:6][cH:7][cH:8][c:80]12",
             [(1, 152.6), (3, 143.1), (4, 120.4), (40, 135.7), (5, 126.4), (6, 130.3), (7, 127.2), (8, 127.6), (80, 128.7)]),
         new("quinoxaline", RingKind.Azine, 1.0, "[n:1]1[cH:2][cH:2][n:1][c:40]2[cH:5][cH:6][cH:6][cH:5][c:40]12",
             [(2, 145.1), (40, 143.0), (5, 129.5), (6, 129.9)]),

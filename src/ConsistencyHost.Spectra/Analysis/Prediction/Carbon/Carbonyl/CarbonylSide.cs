@@ -28,9 +28,9 @@ internal static class CarbonylSide
 
         if (context.IsAromatic(side))
         {
-            var facts = RingFacts.Of(context);
-            return facts.SmallestRingHetero[side] == 0 ? SideKind.Aryl
-                : facts.SmallestSize[side] == 5 ? SideKind.FiveRingHeteroaryl : SideKind.SixRingHeteroaryl;
+            var facts = Aromatic.AromaticFacts.Of(context);
+            return !facts.RingHasHetero[side] ? SideKind.Aryl
+                : facts.RingSize[side] == 5 ? SideKind.FiveRingHeteroaryl : SideKind.SixRingHeteroaryl;
         }
 
         if (Topology.IsSp3Carbon(context, side))
@@ -90,7 +90,7 @@ internal static class CarbonylSide
         Group.Alkoxy or Group.Aryloxy => -3.3,
         Group.Acyloxy or Group.Sulfonyloxy => -5.5,
         Group.AlkylAmino or Group.DialkylAmino or Group.Ammonium => -2.5,
-        Group.Amido or Group.Sulfonamido or Group.AzoleNitrogen => -3.2,
+        Group.Amido or Group.DialkylAmido or Group.Sulfonamido or Group.AzoleNitrogen => -3.2,
         Group.Azido => -5.5,
         Group.Nitro => -12.0,
         Group.Sulfide or Group.Thiol => -3.8,

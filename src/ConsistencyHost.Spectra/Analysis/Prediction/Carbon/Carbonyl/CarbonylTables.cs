@@ -8,7 +8,8 @@ namespace ConsistencyHost.Spectra.Analysis.Prediction.Carbon.Carbonyl;
 /// From memory of the carbonyl tables of Pretsch, Bühlmann and Badertscher (2009) and Kalinowski, Berger and
 /// Braun (1988), each row read off its parents: ketones — acetone 207.1 (Gottlieb 1997: 207.07), 2-butanone 209.3,
 /// 3-methyl-2-butanone 212.5, pinacolone 213.5, acetophenone 198.1, 2-acetylthiophene 190.7, 2-acetylfuran 186.8,
-/// 2-acetylpyridine 200.1, methyl vinyl ketone 198.5, 4-phenylbut-3-yn-2-one 184.7, 2,3-butanedione 197.4,
+/// 2-acetylpyridine 200.1, methyl vinyl ketone 198.5, 4-phenylbut-3-yn-2-one 184.7, 2,3-butanedione 197.4, benzil
+/// 194.6 and ethyl benzoylformate 186.4 (acyl side −8, wide),
 /// trifluoroacetophenone 180.5; aldehydes — acetaldehyde 200.5, propanal 202.8, isobutyraldehyde 204.9,
 /// pivalaldehyde 205.6, benzaldehyde 192.2, furfural 177.8, thiophene-2-carbaldehyde 183.0, pyridine-2-carbaldehyde
 /// 193.4, cinnamaldehyde 193.7, propynal 176.8; acids — acetic 176.0 (Gottlieb 1997: 175.99), hexanoic 180.6,
@@ -24,7 +25,7 @@ namespace ConsistencyHost.Spectra.Analysis.Prediction.Carbon.Carbonyl;
 internal static class CarbonylTables
 {
     public static readonly CarbonylSideTable Ketone = new("ketone C=O", 207.0,
-        [2.4, 5.6, 6.8, -8.9, -18.0, -7.5, -8.5, -22.3, -11.0, -17.6, -5.0], 4.0);
+        [2.4, 5.6, 6.8, -8.9, -18.0, -7.5, -8.5, -22.3, -8.0, -17.6, -5.0], 4.0);
 
     public static readonly CarbonylSideTable Aldehyde = new("aldehyde C=O", 200.5,
         [2.3, 4.4, 5.1, -8.3, -19.0, -7.0, -6.8, -23.7, -10.0, -16.0, -5.0], 3.5);

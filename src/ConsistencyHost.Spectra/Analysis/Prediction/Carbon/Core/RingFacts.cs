@@ -30,8 +30,21 @@ internal sealed class RingFacts
     /// <summary>Index of the atom's smallest ring in <see cref="PredictionContext.Rings"/> (−1 when acyclic).</summary>
     public int[] SmallestRingIndex { get; }
 
-    /// <summary>The facts of <paramref name="context"/>'s molecule.</summary>
-    public static RingFacts Of(PredictionContext context) => Cache.GetValue(context, Compute);
+    [ThreadStatic]
+    private static (PredictionContext? Context, RingFacts? Facts) last;
+
+    /// <summary>The facts of <paramref name="context"/>'s molecule (the last one asked for on this thread is kept at hand).</summary>
+    public static RingFacts Of(PredictionContext context)
+    {
+        if (ReferenceEquals(last.Context, context))
+        {
+            return last.Facts!;
+        }
+
+        var facts = Cache.GetValue(context, Compute);
+        last = (context, facts);
+        return facts;
+    }
 
     private static RingFacts Compute(PredictionContext context)
     {

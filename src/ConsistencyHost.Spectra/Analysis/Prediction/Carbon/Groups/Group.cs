@@ -58,8 +58,10 @@ internal enum Group : byte
     DialkylAmino,
     /// <summary>–N⁺ (ammonium, not aromatic).</summary>
     Ammonium,
-    /// <summary>–NH–C(=O) / –NR–C(=O) (amide, carbamate, urea, imide nitrogen).</summary>
+    /// <summary>–NH–C(=O) (secondary amide, carbamate, urea nitrogen).</summary>
     Amido,
+    /// <summary>–NR–C(=O) (tertiary amide, carbamate, urea or imide nitrogen).</summary>
+    DialkylAmido,
     /// <summary>–N–SO2R.</summary>
     Sulfonamido,
     /// <summary>A ring nitrogen of an aromatic ring (N-alkyl azole, N-aryl azole, pyridinium).</summary>

@@ -177,7 +177,7 @@ internal static class GroupClassifier
             substituents++;
             if (Topology.IsCarbonylCarbon(m, x))
             {
-                return Group.Amido;
+                return m.Atoms[atom].HydrogenCount > 0 ? Group.Amido : Group.DialkylAmido;
             }
 
             if (m.Atoms[x].AtomicNumber == Topology.Sulfur && Topology.DoubleBondedOxygens(m, x) >= 2)

@@ -49,7 +49,8 @@ internal static class GroupNames
         names[(int)Group.AlkylAmino] = "NHR";
         names[(int)Group.DialkylAmino] = "NR2";
         names[(int)Group.Ammonium] = "N⁺";
-        names[(int)Group.Amido] = "NC(O)";
+        names[(int)Group.Amido] = "NHC(O)";
+        names[(int)Group.DialkylAmido] = "NRC(O)";
         names[(int)Group.Sulfonamido] = "NSO2R";
         names[(int)Group.AzoleNitrogen] = "N(aromatic)";
         names[(int)Group.IminoNitrogen] = "N=C";

@@ -77,6 +77,7 @@ internal static class AlkeneIncrements
         Set(Group.AlkylAmino, 27.0, -31.0, 6.0);
         Set(Group.DialkylAmino, 28.0, -32.0, 6.0);
         Set(Group.Amido, 10.0, -20.0, 6.0);
+        Set(Group.DialkylAmido, 10.0, -20.0, 6.0);
         Set(Group.AzoleNitrogen, 8.0, -18.0, 6.0);
         Set(Group.Nitro, 22.4, -0.9, 3.0);
         Set(Group.Sulfide, 13.0, -12.0, 5.0);

@@ -72,14 +72,14 @@ internal static class AlkyneCarbons
 
     private static (double Value, double Spread) GroupTerm(Group group, bool own) => group switch
     {
-        Group.Aryl => own ? (11.8, 1.5) : (5.3, 1.5),
+        Group.Aryl => own ? (11.8, 2.5) : (5.3, 2.5),
         Group.Vinyl => own ? (9.7, 3.0) : (6.0, 3.0),
         Group.Alkynyl => own ? (-4.0, 4.0) : (-6.0, 4.0),
         Group.Silyl => own ? (17.3, 2.5) : (24.0, 2.5),
         Group.Ester or Group.CarboxylicAcid or Group.Amide => own ? (3.4, 3.0) : (2.4, 3.0),
         Group.Acyl or Group.Formyl => own ? (11.1, 3.5) : (6.5, 3.5),
         Group.Alkoxy or Group.Aryloxy => own ? (17.6, 6.0) : (-49.0, 8.0),
-        Group.Amido or Group.Sulfonamido or Group.AzoleNitrogen => own ? (5.5, 6.0) : (-12.4, 6.0),
+        Group.Amido or Group.DialkylAmido or Group.Sulfonamido or Group.AzoleNitrogen => own ? (5.5, 6.0) : (-12.4, 6.0),
         Group.Bromo => own ? (-29.2, 5.0) : (-3.3, 4.0),
         Group.Iodo => own ? (-71.0, 7.0) : (10.5, 5.0),
         _ => (0.0, 15.0),
