@@ -49,7 +49,7 @@ internal static class AromaticSubstituentSum
                 var row = RingSubstituents.Of(context, s, x);
                 var d = distances[i] == 2 && heteroPara[i] ? 3 : distances[i];
                 var five = fiveRing[i];
-                var scale = scales[i] * (d == 0 ? IpsoScale(context, carbon, x) : d == 1 ? FusedOrthoScale(context, carbon, s) : 1.0);
+                var scale = scales[i] * (d == 0 ? IpsoScale(context, carbon, x) : d == 1 ? FusedRingBonds.OrthoScale(context, carbon, s) : 1.0);
                 var spread = d == 0 ? row.Spread : row.Spread / 2;
                 var value = row.At(d) * scale;
                 if (five && d == 1 && IsAcceptor(context, s, x))
@@ -61,12 +61,12 @@ internal static class AromaticSubstituentSum
                 }
 
                 estimate.Add(row.LabelAt(d), value);
-                var proportional = five || (d == 1 && scale != 1.0 && !five) ? 0.25 : 0.12;
+                var proportional = five || (d == 1 && scale != 1.0) ? 0.25 : 0.12;
                 estimate.Widen(0.3 + proportional * Math.Abs(value) + spread);
             }
         }
 
-        estimate.Widen(Crowding(context, carbon));
+        estimate.Widen(RingCrowding.Of(context, carbon));
         OrthoDonors.Apply(context, carbon, estimate);
         return count;
     }
@@ -114,42 +114,6 @@ internal static class AromaticSubstituentSum
         GroupClassifier.Classify(context, ringAtom, x) is Group.Acyl or Group.Formyl or Group.Ester or Group.Amide
             or Group.CarboxylicAcid or Group.Nitrile or Group.Nitro;
 
-    /// <summary>
-    /// In fused six-membered rings an ortho effect follows the bond order (naphthalene C1–C2 high, C2–C3 low):
-    /// 2-naphthol C-1 109.5 (−18.5 from 128.0), C-3 117.7 (−8.2 from 125.9); 1-naphthol C-2 108.7, C-8a 124.4, against
-    /// −12.8 on benzene (from memory): ×1.4 across an α–β bond, ×0.65 across β–β, ×0.7 to or from a fusion carbon.
-    /// </summary>
-    private static double FusedOrthoScale(PredictionContext context, int carbon, int substituted)
-    {
-        var facts = AromaticFacts.Of(context);
-        if (facts.SystemSize[carbon] < 10 || facts.RingSize[carbon] != 6)
-        {
-            return 1.0;
-        }
-
-        if (IsFusion(context, carbon) || IsFusion(context, substituted))
-        {
-            return 0.7;
-        }
-
-        return NextToFusion(context, carbon) || NextToFusion(context, substituted) ? 1.4 : 0.65;
-    }
-
-    private static bool IsFusion(PredictionContext context, int atom) => RingFacts.Of(context).RingCount[atom] >= 2;
-
-    private static bool NextToFusion(PredictionContext context, int atom)
-    {
-        foreach (var x in context.Molecule.Neighbours(atom))
-        {
-            if (context.IsAromatic(x) && context.IsAromaticBond(atom, x) && IsFusion(context, x))
-            {
-                return true;
-            }
-        }
-
-        return false;
-    }
-
     private static bool MiddleIsHetero(PredictionContext context, System.Collections.Immutable.ImmutableArray<int> ring, int at, int forward)
     {
         var middle = forward == 2 ? ring[(at + 1) % ring.Length] : ring[(at - 1 + ring.Length) % ring.Length];
@@ -191,39 +155,5 @@ internal static class AromaticSubstituentSum
         }
 
         return 1.0;
-    }
-
-    private static double Crowding(PredictionContext context, int carbon)
-    {
-        var m = context.Molecule;
-        if (!HasSubstituent(context, carbon))
-        {
-            return 0;
-        }
-
-        var crowded = 0.0;
-        foreach (var x in m.Neighbours(carbon))
-        {
-            if (context.IsAromatic(x) && context.IsAromaticBond(carbon, x) && HasSubstituent(context, x))
-            {
-                crowded += 1.0;
-            }
-        }
-
-        return crowded;
-    }
-
-    private static bool HasSubstituent(PredictionContext context, int ringAtom)
-    {
-        var m = context.Molecule;
-        foreach (var x in m.Neighbours(ringAtom))
-        {
-            if (!(context.IsAromatic(x) && context.IsAromaticBond(ringAtom, x)))
-            {
-                return true;
-            }
-        }
-
-        return false;
     }
 }

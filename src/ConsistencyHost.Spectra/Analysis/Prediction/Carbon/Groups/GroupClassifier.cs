@@ -16,8 +16,8 @@ internal static class GroupClassifier
         {
             Topology.Carbon => CarbonGroup(context, from, atom),
             Topology.Oxygen => OxygenGroup(context, from, atom),
-            Topology.Nitrogen => NitrogenGroup(context, from, atom),
-            Topology.Sulfur => SulfurGroup(m, atom),
+            Topology.Nitrogen => NitrogenSulfurGroups.Nitrogen(context, from, atom),
+            Topology.Sulfur => NitrogenSulfurGroups.Sulfur(m, atom),
             9 => Group.Fluoro,
             17 => Group.Chloro,
             35 => Group.Bromo,
@@ -134,73 +134,6 @@ internal static class GroupClassifier
             Topology.Sulfur when Topology.DoubleBondedOxygens(m, next) >= 2 => Group.Sulfonyloxy,
             14 => Group.Silyloxy,
             _ => Group.Alkoxy,
-        };
-    }
-
-    private static Group NitrogenGroup(PredictionContext context, int from, int atom)
-    {
-        var m = context.Molecule;
-        if (Topology.DoubleBondedOxygens(m, atom) >= 1 || (m.Atoms[atom].Charge > 0 && Topology.CountNeighbours(m, atom, Topology.Oxygen) >= 2))
-        {
-            return Group.Nitro;
-        }
-
-        if (context.IsAromatic(atom))
-        {
-            return Group.AzoleNitrogen;
-        }
-
-        if (m.Atoms[atom].Charge > 0)
-        {
-            return Topology.PartnerByOrder(m, atom, 2, Topology.Nitrogen) >= 0 ? Group.Azido : Group.Ammonium;
-        }
-
-        if (Topology.PartnerByOrder(m, atom, 2) >= 0)
-        {
-            return Topology.PartnerByOrder(m, atom, 2, Topology.Nitrogen) >= 0 ? Group.Azido : Group.IminoNitrogen;
-        }
-
-        return Topology.PartnerByOrder(m, atom, 3) >= 0 ? Group.Other : AmineGroup(context, from, atom);
-    }
-
-    private static Group AmineGroup(PredictionContext context, int from, int atom)
-    {
-        var m = context.Molecule;
-        var substituents = 0;
-        foreach (var x in m.Neighbours(atom))
-        {
-            if (x == from)
-            {
-                continue;
-            }
-
-            substituents++;
-            if (Topology.IsCarbonylCarbon(m, x))
-            {
-                return m.Atoms[atom].HydrogenCount > 0 ? Group.Amido : Group.DialkylAmido;
-            }
-
-            if (m.Atoms[x].AtomicNumber == Topology.Sulfur && Topology.DoubleBondedOxygens(m, x) >= 2)
-            {
-                return Group.Sulfonamido;
-            }
-        }
-
-        return substituents switch { 0 => Group.Amino, 1 => Group.AlkylAmino, _ => Group.DialkylAmino };
-    }
-
-    private static Group SulfurGroup(Molecule m, int atom)
-    {
-        if (m.Atoms[atom].HydrogenCount > 0)
-        {
-            return Group.Thiol;
-        }
-
-        return Topology.DoubleBondedOxygens(m, atom) switch
-        {
-            >= 2 => Group.Sulfonyl,
-            1 => Group.Sulfinyl,
-            _ => m.Atoms[atom].Charge != 0 ? Group.Other : Group.Sulfide,
         };
     }
 }
