@@ -12,10 +12,11 @@ public sealed class CarbonShiftsBehaviourTests
     [Fact]
     public void Predict_AtomThatIsNotCarbon_SaysWhichAtomAndWhatWasExpected()
     {
-        var context = PredictionContext.Of(SmilesReader.Read("CCO").Value!);
+        // Methyl acetate: atom 3 is the ester oxygen.
+        var context = PredictionContext.Of(SmilesReader.Read("CC(=O)OC").Value!);
 
-        var error = Assert.Throws<ArgumentException>(() => CarbonShifts.Predict(context, 2, "CDCl3"));
-        Assert.Contains("Atom 2 is O, not carbon", error.Message);
+        var error = Assert.Throws<ArgumentException>(() => CarbonShifts.Predict(context, 3, "CDCl3"));
+        Assert.Contains("Atom 3 is O, not carbon", error.Message);
     }
 
     [Fact]
