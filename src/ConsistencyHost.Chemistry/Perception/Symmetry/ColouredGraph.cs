@@ -6,8 +6,7 @@ namespace ConsistencyHost.Chemistry.Perception.Symmetry;
 /// <summary>The heavy-atom graph in CSR form with vertex invariants and bond colours, for refinement and search.</summary>
 /// <remarks>Vertex invariant: element, isotope, charge, attached-H count, degree, radical (one ulong, one field
 /// per bit range). Bond colour: 4 for a perceived aromatic bond, otherwise the bond order, so both Kekulé forms
-/// of an arene give the same graph. Charges and bonds of resonance-delocalised sets are replaced by the
-/// form-independent colours of <see cref="ResonanceColours"/>.</remarks>
+/// of an arene give the same graph.</remarks>
 internal sealed class ColouredGraph
 {
     public ColouredGraph(Molecule molecule, Aromaticity aromaticity)
@@ -20,7 +19,6 @@ internal sealed class ColouredGraph
             Start[v + 1] = Start[v] + molecule.Degree(v);
         }
 
-        var (charge, delocalised) = ResonanceColours.Of(molecule, aromaticity);
         Adjacent = new int[Start[Count]];
         EdgeColour = new int[Start[Count]];
         for (var v = 0; v < Count; v++)
@@ -30,11 +28,10 @@ internal sealed class ColouredGraph
             for (var k = 0; k < neighbours.Length; k++)
             {
                 Adjacent[Start[v] + k] = neighbours[k];
-                EdgeColour[Start[v] + k] = aromaticity.AromaticBonds[bonds[k]] ? 4
-                    : delocalised[bonds[k]] ? ResonanceColours.DelocalisedBond : molecule.Bonds[bonds[k]].Order;
+                EdgeColour[Start[v] + k] = aromaticity.AromaticBonds[bonds[k]] ? 4 : molecule.Bonds[bonds[k]].Order;
             }
 
-            Invariant[v] = Pack(molecule.Atoms[v], charge[v], neighbours.Length);
+            Invariant[v] = Pack(molecule.Atoms[v], neighbours.Length);
         }
     }
 
@@ -64,11 +61,11 @@ internal sealed class ColouredGraph
         return -1;
     }
 
-    private static ulong Pack(Atom a, int charge, int degree)
+    private static ulong Pack(Atom a, int degree)
     {
         ulong value = (ulong)(uint)a.AtomicNumber & 0xFF;
         value = (value << 10) | ((ulong)(uint)a.Isotope & 0x3FF);
-        value = (value << 8) | ((ulong)(uint)(charge + 128) & 0xFF);
+        value = (value << 8) | ((ulong)(uint)(a.Charge + 128) & 0xFF);
         value = (value << 5) | ((ulong)(uint)Math.Min(a.HydrogenCount, 31) & 0x1F);
         value = (value << 6) | ((ulong)(uint)Math.Min(degree, 63) & 0x3F);
         value = (value << 2) | ((ulong)(uint)a.Radical & 0x3);
