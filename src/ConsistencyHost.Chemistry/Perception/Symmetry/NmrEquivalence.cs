@@ -77,6 +77,7 @@ public sealed class NmrEquivalence
             }
         }
 
+        (stats, elements) = RingFixedConfigurations.KeepMostSymmetric(stats, elements);
         var best = stats.MaxBy(s => s.HydrogenClassCount)!;
         var slow = SlowRotation(ctx, group, elements[stats.IndexOf(best)], constitutionalOrbit);
         var hydrogens = CouplingPartners.Attach(molecule, ctx.Aromaticity, HydrogenClassBuilder.Build(molecule, best.Symmetry));
