@@ -22,7 +22,9 @@ public static class ProtonInterpreter
         var residuals = new ResidualMatcher(matchOptions).Match(spectrum);
         var minor = spectrum.Signals.Select(s => s.IsMinorSpecies()).ToArray();
         var candidates = Candidates(residuals, spectrum.Signals, molecule, minor);
-        var (counts, fit) = ProtonCounts(spectrum.Signals, minor, fast);
+        var rotamerPairs = RotamerShares.Pair(spectrum.Signals, minor);
+        var stated = RotamerShares.Summed(spectrum.Signals, rotamerPairs);
+        var (counts, fit) = ProtonCounts(spectrum.Signals, stated, minor, fast);
         var best = Choose(spectrum.Signals, counts, minor, candidates, fast);
         var classes = fast;
         if (splits.Count > 0 && !IsPerfect(best))
@@ -51,6 +53,8 @@ public static class ProtonInterpreter
             IntegralFit = fit,
             Residuals = residuals,
             SlowAmideRotation = !ReferenceEquals(classes, fast),
+            StatedCounts = stated,
+            RotamerPairs = rotamerPairs,
         };
     }
 
@@ -78,9 +82,10 @@ public static class ProtonInterpreter
         return result;
     }
 
-    private static (int?[] Counts, IntegralFit? Fit) ProtonCounts(IReadOnlyList<Signal> signals, bool[] minor, IReadOnlyList<ClassInput> classes)
+    private static (int?[] Counts, IntegralFit? Fit) ProtonCounts(IReadOnlyList<Signal> signals, double?[] stated, bool[] minor, IReadOnlyList<ClassInput> classes)
     {
-        var counts = signals.Select(s => s.ProtonCount is { } n ? (int?)(int)Math.Round(n) : null).ToArray();
+        // Stated counts with rotamer shares already summed, so a 5.4 H + 3.6 H pair is 9 H, never 5 H.
+        var counts = stated.Select(n => n is { } v ? (int?)(int)Math.Round(v) : null).ToArray();
         var counted = Enumerable.Range(0, signals.Count).Where(i => !minor[i]).ToList();
         if (counted.All(i => counts[i] is not null) || !counted.All(i => signals[i].Integral is > 0))
         {
