@@ -35,7 +35,7 @@ public sealed class CheckEngine
         _profiles = ProfileResolver.ResolveAll(options, Rules);
         _intake = new EntryIntake(limits ?? IntakeLimits.Default);
         _isolated = isolatedExecutor;
-        _runner = new RuleRunner(isolatedExecutor);
+        _runner = new RuleRunner(isolatedExecutor, options.ReportLimits);
     }
 
     /// <summary>Where a loaded rule runs: "in-process" or "worker".</summary>
