@@ -58,6 +58,8 @@ public sealed class EntryIntake(IntakeLimits limits)
             throw new EntryInputException(field, "give exactly one of peaks, reported_text or jcamp_dx");
         }
 
+        NumericRanges.CheckConditions(input, field);
+
         if (input.ReportedText is not null || input.JcampDx is not null)
         {
             var text = input.ReportedText ?? input.JcampDx!;
@@ -108,6 +110,8 @@ public sealed class EntryIntake(IntakeLimits limits)
             {
                 throw new EntryInputException($"{field}[{i}]", "has a shift outside -100..1000 ppm or not a finite number");
             }
+
+            NumericRanges.CheckPeak(s, $"{field}[{i}]");
         }
     }
 
@@ -136,9 +140,17 @@ public sealed class EntryIntake(IntakeLimits limits)
             }
         }
 
+        // Name the field that carries the excess, so 30,000 text blocks are not reported under "spectra".
         if (submission.Spectra.Count + submission.ReportedText.Count > limits.MaxSpectra)
         {
-            throw new EntryInputException("spectra", $"the entry has more than {limits.MaxSpectra} spectra or text blocks");
+            var field = submission.ReportedText.Count > submission.Spectra.Count ? "reported_text" : "spectra";
+            throw new EntryInputException(field,
+                $"the entry has {submission.Spectra.Count} spectra and {submission.ReportedText.Count} text blocks; the limit is {limits.MaxSpectra} together");
+        }
+
+        for (var i = 0; i < submission.Hrms.Count; i++)
+        {
+            NumericRanges.CheckHrms(submission.Hrms[i], $"claims.hrms[{i}]");
         }
 
         for (var i = 0; i < submission.ReportedText.Count; i++)
