@@ -21,9 +21,9 @@ public static class ProtonInterpreter
         var splits = AmideRotation.Splits(molecule, equivalence).Hydrogen;
         var residuals = new ResidualMatcher(matchOptions).Match(spectrum);
         var minor = spectrum.Signals.Select(s => s.IsMinorSpecies()).ToArray();
-        var candidates = Candidates(residuals, spectrum.Signals, molecule, minor);
         var rotamerPairs = RotamerShares.Pair(spectrum.Signals, minor);
         var stated = RotamerShares.Summed(spectrum.Signals, rotamerPairs);
+        var candidates = Candidates(residuals, spectrum.Signals, molecule, minor, stated);
         var (counts, fit) = ProtonCounts(spectrum.Signals, stated, minor, fast);
         var best = Choose(spectrum.Signals, counts, minor, candidates, fast);
         var classes = fast;
@@ -59,8 +59,16 @@ public static class ProtonInterpreter
     }
 
 
+    /// <summary>
+    /// A signal the author integrated to this many protons or more is the compound's, never water: a water trace is
+    /// one exchange-averaged line that authors leave unintegrated or integrate to a fraction or to 2 H (its
+    /// H2O), while a 3 H or 9 H singlet in the water window is a methyl or tert-butyl group (common practice).
+    /// Reading such a line as water would hide a wrong structure behind a water warning.
+    /// </summary>
+    private const double MinCompoundCountNotWater = 2.5;
+
     /// <summary>Signals that may not be the compound's, each with the role it would have.</summary>
-    private static Dictionary<int, SignalRole> Candidates(ResidualMatchResult residuals, IReadOnlyList<Signal> signals, Molecule molecule, bool[] minor)
+    private static Dictionary<int, SignalRole> Candidates(ResidualMatchResult residuals, IReadOnlyList<Signal> signals, Molecule molecule, bool[] minor, double?[] stated)
     {
         var selfImpurities = residuals.Impurities.Where(e => SameCompound.Is(molecule, e.Impurity.Smiles)).Select(e => e.Impurity.Name).ToHashSet(StringComparer.Ordinal);
         var credible = residuals.Impurities.Where(e => e.MeetsMinimum).Select(e => e.Impurity.Name).ToHashSet(StringComparer.Ordinal);
@@ -69,6 +77,7 @@ public static class ProtonInterpreter
         {
             if (minor[match.SignalIndex] || result.ContainsKey(match.SignalIndex)) continue;
             if (!ResidualShape.Fits(signals[match.SignalIndex], match)) continue;
+            if (match.Kind == ResidualMatchKind.Water && stated[match.SignalIndex] >= MinCompoundCountNotWater) continue;
             var role = match.Kind switch
             {
                 ResidualMatchKind.ResidualSolvent => SignalRole.ResidualSolvent,
