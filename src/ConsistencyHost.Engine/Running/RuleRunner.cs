@@ -58,6 +58,11 @@ public sealed class RuleRunner(IRuleExecutor? isolated = null, ReportLimits? lim
 
     private StartedRun Start(ActiveRule rule, IEntryView entry, EntrySubmission submission, CancellationToken cancellationToken)
     {
+        if (RuleApplicability.SkipReason(rule.Descriptor, entry) is { } nothingToCheck)
+        {
+            return StartedRun.Skipped(nothingToCheck);
+        }
+
         if (RunsIsolated(rule))
         {
             var started = Stopwatch.StartNew();
