@@ -84,8 +84,9 @@ public sealed class NmrEquivalence
         var carbons = CarbonClasses(molecule, best.Symmetry.Orbit);
         var unspecified = StereoEnumeration.UnspecifiedCount(tetra, doubles);
         var exact = !ctx.Search.BudgetExceeded;
-        return new NmrEquivalence(hydrogens, carbons, constitutional,
-            SignalCountRanges.Hydrogen(stats, unspecified, independent, exact, slow), SignalCountRanges.Carbon(stats, unspecified, independent, exact, slow), stats.Count)
+        var (h, c) = MetalGeometry.Widen(molecule, constitutionalOrbit, hydrogens, carbons,
+            SignalCountRanges.Hydrogen(stats, unspecified, independent, exact, slow), SignalCountRanges.Carbon(stats, unspecified, independent, exact, slow));
+        return new NmrEquivalence(hydrogens, carbons, constitutional, h, c, stats.Count)
         {
             IsExact = exact,
         };

@@ -52,4 +52,22 @@ public sealed class RingSystemStereoTests
         Assert.DoesNotContain(result.CarbonClasses13C, c => c.Contains(3) && c.Contains(7));
         Assert.DoesNotContain(result.CarbonClasses13C, c => c.Contains(4) && c.Contains(6));
     }
+
+    [Fact]
+    public void Of_OctahedralCobaltPentammine_GivesARangeThatHoldsCisAndTransAmmines()
+    {
+        // Hand analysis (issue 16): as an octahedron, [Co(NH3)5(OAc)]2+ has the four NH3 cis to the acetate as one
+        // class and the trans NH3 as another (2 NH3 environments + CH3 = 3 H classes). The graph alone cannot say
+        // so; the range must hold 3 and say why, never a confident 2.
+        var result = NmrEquivalence.Of(SmilesReader.Read("N[Co+2](N)(N)(N)(N)OC(C)=O", SmilesReadOptions.Lenient).Value!);
+        Assert.InRange(3, result.Expected1H.Min, result.Expected1H.Max);
+        Assert.Contains(result.Expected1H.Reasons, r => r.Contains("coordination geometry", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Of_OrganicMoleculeWithoutMetal_HasNoGeometryReason()
+    {
+        var result = NmrEquivalence.Of(SmilesReader.Read("CC(=O)C12CC3CC(CC(C3)C1)C2").Value!);
+        Assert.DoesNotContain(result.Expected1H.Reasons, r => r.Contains("coordination geometry", StringComparison.Ordinal));
+    }
 }
