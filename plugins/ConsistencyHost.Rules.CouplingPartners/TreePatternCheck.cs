@@ -29,9 +29,25 @@ internal static class TreePatternCheck
             var tree = context.Trees![cls];
             var forced = tree.Links.Where(l => !l.IsHeteronuclear && !l.Range.MayVanish && l.PartnerClass != cls).ToList();
             var needed = forced.Sum(l => l.Count);
-            if (implied >= needed || !AllFirstOrder(context, signal.CentrePpm, forced)) continue;
+            if (implied >= needed || AnyLookAlikeAllows(context, cls, implied) || !AllFirstOrder(context, signal.CentrePpm, forced)) continue;
             yield return Finding(context, s, cls, implied, needed, forced, tree);
         }
+    }
+
+    /// <summary>
+    /// True when another class of the same size allows the pattern: the assignment is chosen on counts, so it may
+    /// have swapped two look-alike classes (an aldehyde CH and an aromatic CH); judge only what no swap explains.
+    /// </summary>
+    private static bool AnyLookAlikeAllows(PartnerContext context, int cls, int implied)
+    {
+        var classes = context.Equivalence!.HydrogenClasses;
+        var size = classes[cls].ParentAtoms.Length;
+        for (var c = 0; c < classes.Length; c++)
+        {
+            if (c != cls && !classes[c].IsExchangeable && classes[c].ParentAtoms.Length == size && context.Trees![c].ForcedPartners <= implied) return true;
+        }
+
+        return false;
     }
 
     private static bool AllFirstOrder(PartnerContext context, double shift, List<CouplingLink> forced)
