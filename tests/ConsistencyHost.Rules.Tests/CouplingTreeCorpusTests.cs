@@ -102,3 +102,23 @@ public sealed partial class CouplingTreeCorpusTests(ITestOutputHelper output)
         public const string JOutside = "j-outside-coupling-types";
     }
 }
+
+/// <summary>A J moved to the wrong coupling type, on a published entry (SI corpus si-134).</summary>
+public sealed class WrongCouplingTypeTests
+{
+    [Fact]
+    public void Check_TransJOnDrawnCisAlkene_FlaggedAsOutsideCouplingTypes()
+    {
+        // si-134, tert-butyl (E)-cinnamate: the vinyl protons couple with 16.0–16.4 Hz, a trans coupling
+        // (Pretsch: trans 12–18, cis 6–12). Drawn as the Z isomer, the only vinyl coupling is cis.
+        var entry = PublishedSiEntries.All.Single(e => e.Id == "si-134");
+        Assert.Contains("/C=C/", entry.Smiles, StringComparison.Ordinal);
+
+        var asPublished = BuiltInRules.Check(entry.Smiles, entry.Text).AllRulesRan();
+        var drawnCis = BuiltInRules.Check(entry.Smiles.Replace("/C=C/", "/C=C\\", StringComparison.Ordinal), entry.Text).AllRulesRan();
+
+        Assert.DoesNotContain("j-outside-coupling-types", asPublished.Codes("coupling-partners"));
+        var finding = drawnCis.Findings.First(f => f.Finding.Code == "j-outside-coupling-types");
+        Assert.NotEmpty(finding.Finding.Atoms);
+    }
+}
