@@ -11,8 +11,11 @@ namespace ConsistencyHost.Cli.Commands;
 /// <summary>The coupling tree of each hydrogen class, as <c>environments</c> prints it (text and JSON).</summary>
 internal static class CouplingTreeOutput
 {
-    public static IReadOnlyList<CouplingTree> Of(Molecule molecule) =>
-        CouplingTreeBuilder.Build(PredictionContext.Of(molecule), NmrEquivalence.Of(molecule));
+    public static IReadOnlyList<CouplingTree> Of(Molecule molecule)
+    {
+        var equivalence = NmrEquivalence.Of(molecule);
+        return CouplingTreeBuilder.Build(PredictionContext.Of(molecule, equivalence.Rings, equivalence.Aromaticity), equivalence);
+    }
 
     public static string Text(IReadOnlyList<CouplingTree> trees)
     {

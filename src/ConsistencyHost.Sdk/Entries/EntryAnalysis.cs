@@ -43,7 +43,8 @@ public sealed class EntryAnalysis
     public IReadOnlyList<CouplingTree>? Couplings => _couplings.Value;
 
     private static IReadOnlyList<CouplingTree>? BuildCouplings(StructurePerception? perception) =>
-        perception is null ? null : CouplingTreeBuilder.Build(PredictionContext.Of(perception.Molecule), perception.Equivalence);
+        perception is null ? null : CouplingTreeBuilder.Build(
+            PredictionContext.Of(perception.Molecule, perception.Equivalence.Rings, perception.Equivalence.Aromaticity), perception.Equivalence);
 
     private static ProtonInterpretation? InterpretProtons(Spectrum spectrum, StructurePerception? perception) =>
         spectrum.Nucleus == Nucleus.H1 && perception is not null

@@ -9,10 +9,11 @@ public sealed record CouplingTree(int ClassIndex, IReadOnlyList<CouplingLink> Li
     /// Protons of other classes whose coupling cannot vanish: a first-order pattern of this class shows at least
     /// these splittings (unless the partner's shift is so close that the pair is second order).
     /// </summary>
-    public int ForcedPartners => Links.Where(l => !l.IsHeteronuclear && !l.Range.MayVanish && l.PartnerClass != ClassIndex).Sum(l => l.Count);
+    /// <remarks>Computed once: the checks read it for every class of a signal's size, on every signal.</remarks>
+    public int ForcedPartners { get; } = Links.Where(l => !l.IsHeteronuclear && !l.Range.MayVanish && l.PartnerClass != ClassIndex).Sum(l => l.Count);
 
     /// <summary>Largest |J| any branch allows, Hz (0 for a class with no partners).</summary>
-    public double LargestJHz => Links.Count == 0 ? 0 : Links.Max(l => l.Range.HighHz);
+    public double LargestJHz { get; } = Links.Count == 0 ? 0 : Links.Max(l => l.Range.HighHz);
 
     /// <summary>
     /// The first-order pattern the couplings that cannot vanish give, one letter per branch ("dq"), and the

@@ -27,27 +27,61 @@ public static class CouplingTreeBuilder
         var group = classes[c];
         var p = group.ParentAtoms[0];
         var links = new List<CouplingLink>();
-        foreach (var d in group.Geminal2J.Concat(group.Vicinal3J).Concat(group.LongRange4J).Distinct())
+        // Loops over the partner lists rather than LINQ (Concat, Distinct, GroupBy): this runs on every checked
+        // entry, and the allocations of the query form cost more than the typing itself.
+        Span<int> counts = stackalloc int[3];
+        Span<int> firstAtom = stackalloc int[3];
+        ReadOnlySpan<System.Collections.Immutable.ImmutableArray<int>> lists = [group.Geminal2J, group.Vicinal3J, group.LongRange4J];
+        for (var li = 0; li < lists.Length; li++)
         {
-            var partner = classes[d];
-            // Partners of one class may sit at different distances from this proton (ortho and para of a
-            // para-disubstituted ring): one branch per distance, para (five bonds) left out.
-            foreach (var byDistance in partner.ParentAtoms.GroupBy(q => Distance(m, p, q)).Where(g => g.Key <= 2).OrderBy(g => g.Key))
+            for (var di = 0; di < lists[li].Length; di++)
             {
-                var q = byDistance.First();
-                var type = Type(context, p, q, byDistance.Key, group.IsExchangeable || partner.IsExchangeable);
-                links.Add(new CouplingLink(d, -1, byDistance.Count(), byDistance.Key + 2, type, JTable.Of(type)));
+                var d = lists[li][di];
+                if (SeenBefore(lists, li, di)) continue;
+                var partner = classes[d];
+                // Partners of one class may sit at different distances from this proton (ortho and para of a
+                // para-disubstituted ring): one branch per distance, para (five bonds) left out.
+                counts.Clear();
+                foreach (var q in partner.ParentAtoms)
+                {
+                    var distance = NearDistance(m, p, q);
+                    if (distance > 2) continue;
+                    if (counts[distance]++ == 0) firstAtom[distance] = q;
+                }
+
+                for (var distance = 0; distance <= 2; distance++)
+                {
+                    if (counts[distance] == 0) continue;
+                    var type = Type(context, p, firstAtom[distance], distance, group.IsExchangeable || partner.IsExchangeable);
+                    links.Add(new CouplingLink(d, -1, counts[distance], distance + 2, type, JTable.Of(type)));
+                }
             }
         }
 
         foreach (var x in group.HeteronuclearNeighbours)
         {
-            var bonds = Distance(m, p, x) + 1;
+            var bonds = NearDistance(m, p, x) + 1;
             var type = HeteroType(m.Atoms[x].AtomicNumber, bonds);
             links.Add(new CouplingLink(-1, x, 1, bonds, type, JTable.Of(type)));
         }
 
         return new CouplingTree(c, links);
+    }
+
+    /// <summary>True when the partner at <paramref name="list"/>[<paramref name="at"/>] already appeared earlier (a class listed twice gets one branch set).</summary>
+    private static bool SeenBefore(ReadOnlySpan<System.Collections.Immutable.ImmutableArray<int>> lists, int list, int at)
+    {
+        var d = lists[list][at];
+        for (var li = 0; li <= list; li++)
+        {
+            var end = li == list ? at : lists[li].Length;
+            for (var i = 0; i < end; i++)
+            {
+                if (lists[li][i] == d) return true;
+            }
+        }
+
+        return false;
     }
 
     /// <summary>13C–19F couplings of a carbon atom: every fluorine within three bonds (1J–4J).</summary>
@@ -167,8 +201,29 @@ public static class CouplingTreeBuilder
         return best;
     }
 
+    /// <summary>Bonds between two atoms: 0, 1 or 2, and 3 for anything farther (no search, no allocation).</summary>
+    private static int NearDistance(Molecule m, int a, int b)
+    {
+        if (a == b) return 0;
+        var neighbours = m.Neighbours(a);
+        foreach (var n in neighbours)
+        {
+            if (n == b) return 1;
+        }
+
+        foreach (var n in neighbours)
+        {
+            foreach (var y in m.Neighbours(n))
+            {
+                if (y == b) return 2;
+            }
+        }
+
+        return 3;
+    }
+
     /// <summary>Bonds between two atoms, counted up to <paramref name="limit"/> (returns limit + 1 beyond it).</summary>
-    private static int Distance(Molecule m, int a, int b, int limit = 2)
+    private static int Distance(Molecule m, int a, int b, int limit)
     {
         if (a == b) return 0;
         var frontier = new List<int> { a };
