@@ -12,10 +12,6 @@ internal static class PublishedSiEntries
 
     private static IReadOnlyList<PublishedSiEntry> Read()
     {
-        var path = Path.Combine(AppContext.BaseDirectory, "Fixtures", "published-si-entries.tsv");
-        return [.. File.ReadLines(path)
-            .Where(line => line.Length > 0 && !line.StartsWith('#'))
-            .Select(line => line.Split('\t'))
-            .Select(cells => new PublishedSiEntry(cells[0], cells[2], cells[3], cells[4]))];
+        return [.. FixtureTsv.Rows("published-si-entries.tsv").Select(cells => new PublishedSiEntry(cells[0], cells[2], cells[3], cells[4]))];
     }
 }
