@@ -1,4 +1,6 @@
 using ConsistencyHost.Spectra.Analysis.Interpretation;
+using ConsistencyHost.Spectra.Analysis.Prediction;
+using ConsistencyHost.Spectra.Analysis.Prediction.Coupling;
 using ConsistencyHost.Spectra.Model;
 
 namespace ConsistencyHost.Sdk.Entries;
@@ -11,6 +13,7 @@ namespace ConsistencyHost.Sdk.Entries;
 public sealed class EntryAnalysis
 {
     private readonly Lazy<ProtonInterpretation?>[] _protons;
+    private readonly Lazy<IReadOnlyList<CouplingTree>?> _couplings;
 
     /// <summary>Prepares lazy analyses for <paramref name="spectra"/> against <paramref name="perception"/>.</summary>
     public EntryAnalysis(IReadOnlyList<Spectrum> spectra, StructurePerception? perception)
@@ -19,6 +22,7 @@ public sealed class EntryAnalysis
         Spectra = spectra;
         Perception = perception;
         _protons = [.. spectra.Select(s => new Lazy<ProtonInterpretation?>(() => InterpretProtons(s, perception), LazyThreadSafetyMode.ExecutionAndPublication))];
+        _couplings = new Lazy<IReadOnlyList<CouplingTree>?>(() => BuildCouplings(perception), LazyThreadSafetyMode.ExecutionAndPublication);
     }
 
     internal IReadOnlyList<Spectrum> Spectra { get; }
@@ -31,6 +35,16 @@ public sealed class EntryAnalysis
     /// </summary>
     public ProtonInterpretation? Protons(int spectrumIndex) =>
         spectrumIndex >= 0 && spectrumIndex < _protons.Length ? _protons[spectrumIndex].Value : null;
+
+    /// <summary>
+    /// The first-order coupling tree of every hydrogen class (in class order), built once per entry; null when
+    /// the entry has no structure.
+    /// </summary>
+    public IReadOnlyList<CouplingTree>? Couplings => _couplings.Value;
+
+    private static IReadOnlyList<CouplingTree>? BuildCouplings(StructurePerception? perception) =>
+        perception is null ? null : CouplingTreeBuilder.Build(
+            PredictionContext.Of(perception.Molecule, perception.Equivalence.Rings, perception.Equivalence.Aromaticity), perception.Equivalence);
 
     private static ProtonInterpretation? InterpretProtons(Spectrum spectrum, StructurePerception? perception) =>
         spectrum.Nucleus == Nucleus.H1 && perception is not null

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using ConsistencyHost.Chemistry.Model;
+using ConsistencyHost.Chemistry.Perception.Rings;
 using ConsistencyHost.Chemistry.Perception.Stereo;
 
 namespace ConsistencyHost.Chemistry.Perception.Symmetry;
@@ -51,6 +52,12 @@ public sealed class NmrEquivalence
     /// perfluoroalkyl chains); classes may then be split more finely than the true symmetry allows.</summary>
     public bool IsExact { get; private init; } = true;
 
+    /// <summary>The smallest set of smallest rings the classes were perceived on (shared so later steps need not perceive it again).</summary>
+    public required RingSet Rings { get; init; }
+
+    /// <summary>The aromaticity the classes were perceived with (shared with <see cref="Rings"/>).</summary>
+    public required Aromaticity Aromaticity { get; init; }
+
     /// <summary>Number of relative configurations evaluated (1 when all stereo is specified or absent).</summary>
     public int ConfigurationsConsidered { get; }
 
@@ -89,6 +96,8 @@ public sealed class NmrEquivalence
         return new NmrEquivalence(hydrogens, carbons, constitutional, h, c, stats.Count)
         {
             IsExact = exact,
+            Rings = ctx.Rings,
+            Aromaticity = ctx.Aromaticity,
         };
     }
 
