@@ -41,7 +41,7 @@ public sealed class WaterCandidateTests
     {
         var checkedEntries = 0;
         var wrong = new List<string>();
-        foreach (var (id, smiles, text) in SiEntries())
+        foreach (var (id, _, smiles, text) in PublishedSiEntries.All)
         {
             Entry entry;
             try
@@ -75,11 +75,4 @@ public sealed class WaterCandidateTests
         Assert.True(checkedEntries >= 40, $"only {checkedEntries} published 1H lists were readable");
         Assert.True(wrong.Count == 0, string.Join("\n", wrong));
     }
-
-    private static IEnumerable<(string Id, string Smiles, string Text)> SiEntries() =>
-        File.ReadLines(Path.Combine(AppContext.BaseDirectory, "Fixtures", "published-si-entries.tsv"))
-            .Where(line => line.Length > 0 && !line.StartsWith('#'))
-            .Select(line => line.Split('\t'))
-            .Where(cells => cells.Length > 4)
-            .Select(cells => (cells[0], cells[3], cells[4]));
 }
