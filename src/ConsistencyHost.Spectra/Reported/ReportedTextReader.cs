@@ -60,6 +60,8 @@ public static class ReportedTextReader
                 var before = sink.Count;
                 spectra.Add(SignalListReader.Read(c, HeaderReader.Read(c, sink), sink, options, before));
             }
+            else if (spectra.Count > 0 && ListNotes.TryReadClause(c) is { } note)
+                spectra[^1] = spectra[^1] with { Notes = [.. spectra[^1].Notes, note] };
             else
                 SkipUnknown(c, sink);
         }
