@@ -80,7 +80,9 @@ public sealed class CheckEngine
     private CheckReport Run(EntrySubmission submission, CancellationToken cancellationToken)
     {
         var profile = ResolveProfile(submission.Profile);
-        var entry = _intake.Build(submission);
+        // Strict when the request or the profile asks; otherwise unreadable fragments become findings.
+        List<ReportedFinding>? textNotes = submission.StrictText || profile.StrictText ? null : [];
+        var entry = _intake.Build(submission, textNotes);
         if (profile.Rules.Any(rule => !_runner.RunsIsolated(rule)))
         {
             SharedPerception.Prepare(entry);
@@ -91,7 +93,7 @@ public sealed class CheckEngine
         {
             EntryId = submission.EntryId,
             Profile = profile.Name,
-            Findings = [.. findings.OrderBy(f => f.RuleId, StringComparer.Ordinal)],
+            Findings = [.. (textNotes is { Count: > 0 } ? findings.Concat(textNotes) : findings).OrderBy(f => f.RuleId, StringComparer.Ordinal)],
             RuleRuns = [.. runs.OrderBy(r => r.RuleId, StringComparer.Ordinal)],
             Structure = entry.Perception is { } perception
                 ? new StructureSummary(perception.Formula.Hill, perception.Molecule.AtomCount, perception.Formula.MonoisotopicMass)

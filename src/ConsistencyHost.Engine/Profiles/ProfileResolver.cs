@@ -58,7 +58,7 @@ public static class ProfileResolver
             }
         }
 
-        return new ResolvedProfile(profile.Name, active);
+        return new ResolvedProfile(profile.Name, active, profile.StrictText);
     }
 
     /// <summary>
