@@ -4,7 +4,8 @@ namespace ConsistencyHost.Spectra.Solvents;
 /// <remarks>
 /// Defaults derived in the reference notes from Gottlieb 1997: solvent and C–H impurity lines move little
 /// (±0.03 ppm 1H, ±0.3 ppm 13C); water moves with hydrogen-bond acceptors, most in non-polar solvents (±0.3 ppm,
-/// ±0.5 ppm in CDCl3, C6D6 and toluene-d8); HOD in D2O is solute-independent but temperature-dependent (±0.05 ppm).
+/// ±0.5 ppm in CDCl3, C6D6 and toluene-d8, ±0.15 ppm in DMSO-d6 where solutes hardly move it); HOD in D2O is
+/// solute-independent but temperature-dependent (±0.05 ppm).
 /// </remarks>
 public sealed record ResidualMatchOptions
 {
@@ -25,6 +26,13 @@ public sealed record ResidualMatchOptions
 
     /// <summary>Solvents that get <see cref="WideWaterWindowPpm"/>.</summary>
     public IReadOnlyList<string> WideWaterSolvents { get; init; } = ["CDCl3", "C6D6", "toluene-d8"];
+
+    /// <summary>
+    /// Water window in DMSO-d6, ppm. DMSO already hydrogen-bonds water strongly, so solutes hardly move it
+    /// (Gottlieb 1997: H2O 3.33, HDO 3.30); ±0.15 keeps temperature and acid/base drift (from memory: 3.3–3.4 ppm
+    /// across typical samples) while no longer claiming a compound's O–CH or N–CH at 3.5–3.6 ppm as water.
+    /// </summary>
+    public double DmsoWaterWindowPpm { get; init; } = 0.15;
 
     /// <summary>Window for HOD in D2O, ppm.</summary>
     public double HodInD2OWindowPpm { get; init; } = 0.05;

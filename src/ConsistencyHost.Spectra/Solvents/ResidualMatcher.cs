@@ -52,6 +52,7 @@ public sealed class ResidualMatcher(ResidualMatchOptions? options = null)
         if (line.Nucleus == Nucleus.C13) return options.CarbonWindowPpm;
         if (solvent == "D2O") return options.HodInD2OWindowPpm;
         if (line.Kind == SolventLineKind.Residual) return options.ProtonWindowPpm;
+        if (solvent == "DMSO-d6") return options.DmsoWaterWindowPpm;
         return options.WideWaterSolvents.Contains(solvent) ? options.WideWaterWindowPpm : options.WaterWindowPpm;
     }
 
