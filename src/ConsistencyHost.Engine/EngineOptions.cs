@@ -49,6 +49,12 @@ public sealed record EngineOptions
     /// <summary>Configured profiles; a "default" profile with every rule at its defaults is added when absent.</summary>
     public IReadOnlyList<Profile> Profiles { get; init; } = [];
 
+    /// <summary>
+    /// Problems found while reading the configuration (a misspelt key, a bad value); the engine reports them at
+    /// start together with the problems found against the loaded rules, so a group leader sees every one at once.
+    /// </summary>
+    public IReadOnlyList<string> ConfigurationProblems { get; init; } = [];
+
     /// <summary>How many findings and characters one rule may report (configuration section <c>ReportLimits</c>).</summary>
     public Running.ReportLimits ReportLimits { get; init; } = Running.ReportLimits.Default;
 }

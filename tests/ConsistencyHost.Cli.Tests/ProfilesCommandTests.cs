@@ -64,7 +64,10 @@ public sealed class ProfilesCommandTests
     {
         var config = Path.Combine(Path.GetTempPath(), $"ch-profile-{Guid.NewGuid():N}.json");
         await File.WriteAllTextAsync(config, """
-            { "ConsistencyHost": { "Profiles": { "strict": { "Rules": { "spectrum-metadata": { "Option": { "RequireTemperature": "true" } } } } } } }
+            { "ConsistencyHost": { "Profiles": { "strict": { "Rules": {
+              "spectrum-metadata": { "Option": { "RequireTemperature": "true" } },
+              "signal-counts": { },
+              "solvent-residual": { "Severities": { "water-reportd": "error" } } } } } } }
             """);
         try
         {
@@ -72,7 +75,11 @@ public sealed class ProfilesCommandTests
 
             Assert.Equal(2, exit);
             Assert.Empty(stdout);
+            // Every kind of problem at once: a misspelt key (read from the file), an unknown rule id and an unknown
+            // finding code (found against the loaded rules).
             Assert.Contains("ConsistencyHost:Profiles:strict:Rules:spectrum-metadata:Option: unknown key 'Option'", stderr, StringComparison.Ordinal);
+            Assert.Contains("profile 'strict': unknown rule id 'signal-counts'", stderr, StringComparison.Ordinal);
+            Assert.Contains("unknown finding code 'water-reportd'", stderr, StringComparison.Ordinal);
         }
         finally
         {

@@ -39,7 +39,8 @@ public static class EngineConfiguration
             TrustedPlugins = ReadTrusted(section.GetSection("TrustedPlugins")),
             ReportLimits = ReadReportLimits(section.GetSection("ReportLimits"), problems),
         };
-        return problems.Count == 0 ? options : throw new ProfileConfigurationException(problems);
+        // Not thrown here: the engine lists these with the profile problems it finds against the loaded rules.
+        return options with { ConfigurationProblems = problems };
     }
 
     /// <summary>Each limit a positive whole number; an absent one keeps its default.</summary>

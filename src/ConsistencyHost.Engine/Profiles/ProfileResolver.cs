@@ -12,7 +12,7 @@ public static class ProfileResolver
     public static IReadOnlyDictionary<string, ResolvedProfile> ResolveAll(EngineOptions options, IReadOnlyList<RuleDescriptor> rules)
     {
         var profiles = WithDefault(options);
-        var problems = new List<string>();
+        var problems = new List<string>(options.ConfigurationProblems);
         var resolved = new Dictionary<string, ResolvedProfile>(StringComparer.Ordinal);
         foreach (var profile in profiles)
         {

@@ -22,6 +22,7 @@ public sealed class ReliabilityDocTests
             using var stream = new MemoryStream(Encoding.UTF8.GetBytes(snippet));
             var section = new ConfigurationBuilder().AddJsonStream(stream).Build().GetSection("ConsistencyHost");
             var options = EngineConfiguration.Read(section, "plugins");
+            Assert.Empty(options.ConfigurationProblems);
             using var executor = IsolationConfiguration.CreateExecutor(section.GetSection("Isolation"));
 
             Assert.NotEmpty(options.TrustedPlugins);
