@@ -17,6 +17,8 @@ internal static class ProseClauses
         ("Calcd for C", "elemental analysis"), ("Found: C", "elemental analysis"), ("Found C", "elemental analysis"),
         ("Yield", "yield"), ("[α]", "optical rotation"), ("[a]D", "optical rotation"), ("αD", "optical rotation"),
         ("LRMS", "low-resolution MS"), ("MS (", "low-resolution MS"), ("GC-MS", "low-resolution MS"), ("LC-MS", "low-resolution MS"),
+        ("EI-MS", "low-resolution MS"), ("ESI-MS", "low-resolution MS"), ("EIMS", "low-resolution MS"), ("ESIMS", "low-resolution MS"),
+        ("MS", "low-resolution MS"), ("m/z", "low-resolution MS"),
         ("white", "appearance"), ("colourless", "appearance"), ("colorless", "appearance"), ("yellow", "appearance"),
         ("pale", "appearance"), ("brown", "appearance"), ("orange", "appearance"), ("off-white", "appearance"),
     ];

@@ -16,6 +16,9 @@ internal static class SignalListReader
             c.SkipSpaces();
             if (c.AtEnd || HeaderReader.IsAt(c) || HrmsReader.IsAt(c)) break;
             if (c.TryWord("ppm")) continue;
+            // A low-resolution MS list, Rf, mp, IR … after the signals ends the list: "MS m/z (%): 329 (M+, 100)"
+            // must never be read as a signal at 329 ppm. The caller skips (lenient) or refuses (strict) that prose.
+            if (!TextCursor.IsDigit(c.Current) && ProseClauses.KindAt(c.Text, c.Pos) is not null) break;
             // "…, 7.33 (s, 3H), and 7.35 (s, 2H)": "and" before the last signal (common practice).
             if (signals.Count > 0 && c.Current == 'a' && c.TryWord("and")) continue;
             if (!TextCursor.IsDigit(c.Current) && ReadNote(c, signals, notes) is { } over)

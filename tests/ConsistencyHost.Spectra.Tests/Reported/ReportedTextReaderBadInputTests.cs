@@ -67,6 +67,22 @@ public sealed class ReportedTextReaderBadInputTests
         Assert.Single(Assert.Single(lenient.Spectra).Signals);
     }
 
+    // Low-resolution MS lists after the NMR lists, as printed in published SI text (Fixtures/published-si-entries.tsv
+    // si-023, si-169, si-218 of the rules tests): never read as signals, skipped with a note when lenient.
+    [Theory]
+    [InlineData("1H NMR (400 MHz, CDCl3) d 7.33 (d, 2H, J = 8.0 Hz), 2.43 (s, 3H); MS m/z (%): 331 (M+ + 2, 33.5), 329 (M+, 100), 294 (23).", 2)]
+    [InlineData("13C NMR (100 MHz, CDCl3) δ 159.61, 55.28; EI-MS (m/z, relative intensity) 328 (M+, 100), 313 (15), 297 (12).", 2)]
+    [InlineData("1H NMR (CDCl3/TMS) δ: 6.64 (d, J = 8.8 Hz, 2H), 6.77 (d, J = 8.8 Hz, 2H); MS m/z: 149 (M+).", 2)]
+    public void Read_LowResolutionMsAfterTheList_IsSkippedNeverReadAsSignals(string text, int signals)
+    {
+        var lenient = ReportedTextReader.Read(text, ReadMode.Lenient);
+        Assert.Empty(lenient.Problems);
+        Assert.Equal(signals, Assert.Single(lenient.Spectra).Signals.Count);
+        Assert.All(lenient.Spectra[0].Signals, s => Assert.True(s.ShiftPpm < 200));
+        Assert.Equal("low-resolution MS", Assert.Single(lenient.Skipped).Kind);
+        Assert.False(ReportedTextReader.Read(text).Succeeded);
+    }
+
     [Theory]
     [MemberData(nameof(Rows))]
     public void Read_MalformedText_ReportsOneErrorWithOffsetFragmentAndExpectation(string text, int offset, string fragment, string expected)
