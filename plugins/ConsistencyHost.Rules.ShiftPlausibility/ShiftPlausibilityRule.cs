@@ -1,0 +1,96 @@
+using System.Globalization;
+using ConsistencyHost.Sdk.Entries;
+using ConsistencyHost.Sdk.Findings;
+using ConsistencyHost.Sdk.Rules;
+using ConsistencyHost.Spectra.Analysis.Interpretation;
+using ConsistencyHost.Spectra.Analysis.Prediction;
+using ConsistencyHost.Spectra.Model;
+using ConsistencyHost.Spectra.Solvents;
+
+namespace ConsistencyHost.Rules.ShiftPlausibility;
+
+/// <summary>
+/// Reported 1H and 13C shifts against the predicted window of every class of the structure (the host's shift
+/// model, shared through <see cref="EntryAnalysis.Shifts"/>; method and sources in docs/spectrum-model.md).
+/// A compound signal that no class can explain is flagged (error when far outside every window, warning when
+/// just outside), and so is a non-exchangeable class with no reported signal inside its window. Only the
+/// compound's signals are judged: residual solvent, water and impurity lines found by the interpretation are not.
+/// Spectra without a stated solvent are skipped (referencing and exchangeable windows are unknown).
+/// </summary>
+[Rule("shift-plausibility", "1.0.0", "Every reported 1H and 13C shift fits the predicted window of some class of the structure", Nuclei = ["1H", "13C"])]
+public sealed class ShiftPlausibilityRule : Rule<ShiftPlausibilityOptions>
+{
+    /// <inheritdoc />
+    protected override IEnumerable<Finding> Check(IEntryView entry, ShiftPlausibilityOptions options, CancellationToken cancellationToken)
+    {
+        if (entry.Perception is not { } perception) yield break;
+        for (var i = 0; i < entry.Spectra.Count; i++)
+        {
+            cancellationToken.ThrowIfCancellationRequested();
+            var spectrum = entry.Spectra[i];
+            if (spectrum.Nucleus is not (Nucleus.H1 or Nucleus.C13) || string.IsNullOrWhiteSpace(spectrum.Solvent)) continue;
+            if (entry.Analysis.Shifts(i) is not { } shifts) continue;
+            var judged = spectrum.Nucleus == Nucleus.H1
+                ? ProtonSpectrum(entry, perception, shifts, i, options)
+                : CarbonSpectrum(perception, shifts, i, spectrum, options);
+            foreach (var finding in judged) yield return finding;
+        }
+    }
+
+    private static IEnumerable<Finding> ProtonSpectrum(IEntryView entry, StructurePerception perception, ClassShifts shifts, int index, ShiftPlausibilityOptions options)
+    {
+        if (entry.Analysis.Protons(index) is not { } interpretation) return [];
+        var classes = perception.Equivalence.HydrogenClasses;
+        var table = new ClassTable(
+            "1H", shifts.Hydrogen, options.ProtonSlackPpm, options.ProtonFarPpm,
+            c => [.. classes[c].ParentAtoms.Distinct()],
+            c => $"{classes[c].ParentAtoms.Length} H on {Atoms(perception, classes[c].ParentAtoms)}",
+            c => !classes[c].IsExchangeable);
+        var assigned = AssignedClasses(interpretation);
+        return table.Judge(entry.Spectra[index], index, interpretation.CompoundSignals, s => assigned.GetValueOrDefault(s));
+    }
+
+    private static IEnumerable<Finding> CarbonSpectrum(StructurePerception perception, ClassShifts shifts, int index, Spectrum spectrum, ShiftPlausibilityOptions options)
+    {
+        var classes = perception.Equivalence.CarbonClasses13C;
+        var solventLines = new ResidualMatcher().Match(spectrum).Matches
+            .Where(m => m.Kind == ResidualMatchKind.ResidualSolvent).Select(m => m.SignalIndex).ToHashSet();
+        var counted = Enumerable.Range(0, spectrum.Signals.Count)
+            .Where(s => !spectrum.Signals[s].IsMinorSpecies() && !solventLines.Contains(s)).ToList();
+        var table = new ClassTable(
+            "13C", shifts.Carbon, options.CarbonSlackPpm, options.CarbonFarPpm,
+            c => [.. classes[c]],
+            c => Atoms(perception, classes[c]),
+            _ => true);
+        return table.Judge(spectrum, index, counted, _ => null);
+    }
+
+    /// <summary>
+    /// For each compound signal, the structure classes its assigned classes stand for, together with every class
+    /// the solver could not tell from them (same size and coupling numbers): the solver does not read shifts, so
+    /// among interchangeable classes its choice says nothing.
+    /// </summary>
+    private static Dictionary<int, HashSet<int>> AssignedClasses(ProtonInterpretation interpretation)
+    {
+        var bySignal = new Dictionary<int, HashSet<int>>();
+        if (interpretation.Assignment is not { } assignment) return bySignal;
+        for (var k = 0; k < interpretation.CompoundSignals.Count && k < assignment.ClassesBySignal.Count; k++)
+        {
+            var sources = new HashSet<int>();
+            foreach (var input in assignment.ClassesBySignal[k].Select(c => interpretation.Classes[c]))
+            {
+                foreach (var twin in interpretation.Classes.Where(input.IsInterchangeableWith))
+                {
+                    if (twin.Source >= 0) sources.Add(twin.Source);
+                }
+            }
+
+            if (sources.Count > 0) bySignal[interpretation.CompoundSignals[k]] = sources;
+        }
+
+        return bySignal;
+    }
+
+    private static string Atoms(StructurePerception perception, IEnumerable<int> atoms) =>
+        string.Join(",", atoms.Distinct().Select(a => perception.Molecule.Atoms[a].Symbol + a.ToString(CultureInfo.InvariantCulture)));
+}
