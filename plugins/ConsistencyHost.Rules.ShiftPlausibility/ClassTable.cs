@@ -67,7 +67,7 @@ internal sealed class ClassTable(
         var finding = far
             ? new Finding(ShiftPlausibilityCodes.SignalFarOutside, Severity.Error, message)
             : new Finding(ShiftPlausibilityCodes.SignalJustOutside, Severity.Warning, message);
-        return finding with { Atoms = atomsOf(nearest), Peaks = [new PeakRef(index, signal)] }
+        return (finding with { Atoms = atomsOf(nearest), Peaks = [new PeakRef(index, signal)] })
             .WithEvidence("distance_ppm", Math.Round(distance, 2)).WithEvidence("nearest_low", windows[nearest].Window.Low).WithEvidence("nearest_high", windows[nearest].Window.High);
     }
 
