@@ -1,0 +1,48 @@
+using ConsistencyHost.Sdk.Findings;
+using Xunit.Abstractions;
+
+namespace ConsistencyHost.Rules.Tests;
+
+/// <summary>
+/// Measures the shift-plausibility rule on real author text (Fixtures/published-si-entries.tsv) and on the
+/// positional isomers drawn for the same text (Fixtures/positional-isomers.tsv, built with RDKit). Prints
+/// entries read, clean entries with a false error / false warning, and isomers caught; the figures go to
+/// docs/spectrum-model.md. Asserts the hard target only: no false error on the published entries.
+/// </summary>
+public sealed class ShiftPlausibilityEvaluation(ITestOutputHelper output)
+{
+    private const string RuleId = "shift-plausibility";
+
+    [Fact]
+    public void PublishedEntriesAndIsomers_Figures()
+    {
+        var entries = Rows("published-si-entries.tsv").ToDictionary(c => c[0], c => (Smiles: c[3], Text: c[4]));
+        var falseErrors = new List<string>();
+        var falseWarnings = new List<string>();
+        var flaggedClean = new HashSet<string>();
+        foreach (var (id, entry) in entries)
+        {
+            var findings = Findings(entry.Smiles, entry.Text);
+            if (findings.Any(f => f.Severity == Severity.Error)) falseErrors.Add(id + ": " + findings.First(f => f.Severity == Severity.Error).Message);
+            else if (findings.Any(f => f.Severity == Severity.Warning)) falseWarnings.Add(id + ": " + findings.First(f => f.Severity == Severity.Warning).Message);
+            if (findings.Any(f => f.Severity >= Severity.Warning)) flaggedClean.Add(id);
+        }
+
+        var isomers = Rows("positional-isomers.tsv").ToList();
+        var caught = isomers.Count(c => !flaggedClean.Contains(c[0]) && Findings(c[1], entries[c[0]].Text).Any(f => f.Severity >= Severity.Warning));
+        var judged = isomers.Count(c => !flaggedClean.Contains(c[0]));
+        output.WriteLine($"entries read: {entries.Count}; false error: {falseErrors.Count}; false warning: {falseWarnings.Count} ({100.0 * falseWarnings.Count / entries.Count:0.0}%)");
+        output.WriteLine($"isomers judged (entry itself clean): {judged}; caught (warning or error): {caught} ({100.0 * caught / Math.Max(1, judged):0.0}%)");
+        foreach (var line in falseErrors.Concat(falseWarnings)) output.WriteLine(line);
+        Assert.True(entries.Count > 200, "fixture read");
+        Assert.True(falseErrors.Count == 0, string.Join("\n", falseErrors));
+    }
+
+    private static List<Finding> Findings(string smiles, string text) =>
+        [.. BuiltInRules.Check(smiles, text).Findings.Where(f => f.RuleId == RuleId).Select(f => f.Finding)];
+
+    private static IEnumerable<string[]> Rows(string file) =>
+        File.ReadLines(Path.Combine(AppContext.BaseDirectory, "Fixtures", file))
+            .Where(line => line.Length > 0 && !line.StartsWith('#'))
+            .Select(line => line.Split('\t'));
+}
