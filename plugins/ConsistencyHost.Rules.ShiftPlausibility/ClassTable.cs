@@ -19,7 +19,10 @@ internal sealed class ClassTable(
     Func<int, string> nameOf,
     Func<int, bool> mustAppear)
 {
-    public IEnumerable<Finding> Judge(Spectrum spectrum, int index, IReadOnlyList<int> counted, Func<int, HashSet<int>?> assignedTo)
+    // Descriptions are built only for classes a finding names, once each: several findings may name one class.
+    private readonly string?[] _descriptions = new string?[windows.Count];
+
+    public IEnumerable<Finding> Judge(Spectrum spectrum, int index, IReadOnlyList<int> counted, Func<int, IReadOnlyList<int>?> assignedTo)
     {
         if (windows.Count == 0 || counted.Count == 0) yield break;
         var explained = new bool[windows.Count];
@@ -43,7 +46,7 @@ internal sealed class ClassTable(
             {
                 yield return OutsideEveryWindow(spectrum, index, s, nearest, nearestDistance);
             }
-            else if (assignedTo(s) is { Count: > 0 } assigned && assigned.All(c => Window(c).DistanceOutside(low, high) > 0))
+            else if (assignedTo(s) is { Count: > 0 } assigned && OutsideAll(assigned, low, high))
             {
                 yield return OutsideAssigned(spectrum, index, s, assigned);
             }
@@ -59,6 +62,16 @@ internal sealed class ClassTable(
         }
     }
 
+    private bool OutsideAll(IReadOnlyList<int> classes, double low, double high)
+    {
+        foreach (var c in classes)
+        {
+            if (Window(c).DistanceOutside(low, high) == 0) return false;
+        }
+
+        return true;
+    }
+
     private Finding OutsideEveryWindow(Spectrum spectrum, int index, int signal, int nearest, double distance)
     {
         var far = distance >= farPpm;
@@ -71,22 +84,33 @@ internal sealed class ClassTable(
             .WithEvidence("distance_ppm", Math.Round(distance, 2)).WithEvidence("nearest_low", windows[nearest].Window.Low).WithEvidence("nearest_high", windows[nearest].Window.High);
     }
 
-    private Finding OutsideAssigned(Spectrum spectrum, int index, int signal, HashSet<int> assigned)
+    // assigned: distinct class indices in ascending order (see ShiftPlausibilityRule.AssignedClasses).
+    private Finding OutsideAssigned(Spectrum spectrum, int index, int signal, IReadOnlyList<int> assigned)
     {
-        var first = assigned.Min();
+        var first = assigned[0];
+        var described = new string[assigned.Count];
+        var atoms = new List<int>();
+        for (var k = 0; k < assigned.Count; k++)
+        {
+            described[k] = nameOf(assigned[k]) + ": " + Describe(assigned[k]);
+            foreach (var atom in atomsOf(assigned[k]))
+            {
+                if (!atoms.Contains(atom)) atoms.Add(atom);
+            }
+        }
+
         return new Finding(ShiftPlausibilityCodes.AssignedClassOutside, Severity.Info,
-                Text($"The {nucleus} signal at {spectrum.Signals[signal].Describe()} fits some class of the structure, but not the class(es) the integrals and patterns assign to it ({string.Join("; ", assigned.Order().Select(c => nameOf(c) + ": " + Describe(c)))})."))
-            { Atoms = [.. assigned.Order().SelectMany(atomsOf).Distinct()], Peaks = [new PeakRef(index, signal)] }
+                Text($"The {nucleus} signal at {spectrum.Signals[signal].Describe()} fits some class of the structure, but not the class(es) the integrals and patterns assign to it ({string.Join("; ", described.Distinct(StringComparer.Ordinal))})."))
+            { Atoms = atoms, Peaks = [new PeakRef(index, signal)] }
             .WithEvidence("window_low", windows[first].Window.Low).WithEvidence("window_high", windows[first].Window.High);
     }
 
     private ShiftWindow Window(int c) => windows[c].Window.Widened(slackPpm);
 
-    private string Describe(int c)
-    {
-        var p = windows[c];
-        return Text($"{p.Window.Low:0.0#}–{p.Window.High:0.0#} ppm, most likely {p.Window.MostLikely:0.0#} ({string.Join("; ", p.Reasons)})");
-    }
+    private string Describe(int c) => _descriptions[c] ??= Describe(windows[c]);
+
+    private static string Describe(ShiftPrediction p) =>
+        Text($"{p.Window.Low:0.0#}–{p.Window.High:0.0#} ppm, most likely {p.Window.MostLikely:0.0#} ({string.Join("; ", p.Reasons)})");
 
     private static (double Low, double High) Span(Signal signal) =>
         signal.ShiftPpm is { } shift ? (shift, shift) : (signal.RangeLowPpm ?? signal.CentrePpm, signal.RangeHighPpm ?? signal.CentrePpm);

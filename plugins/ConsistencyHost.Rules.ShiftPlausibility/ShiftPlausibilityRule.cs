@@ -2,6 +2,7 @@ using System.Globalization;
 using ConsistencyHost.Sdk.Entries;
 using ConsistencyHost.Sdk.Findings;
 using ConsistencyHost.Sdk.Rules;
+using ConsistencyHost.Spectra.Analysis.Assignment;
 using ConsistencyHost.Spectra.Analysis.Interpretation;
 using ConsistencyHost.Spectra.Analysis.Prediction;
 using ConsistencyHost.Spectra.Model;
@@ -53,10 +54,7 @@ public sealed class ShiftPlausibilityRule : Rule<ShiftPlausibilityOptions>
     private static IEnumerable<Finding> CarbonSpectrum(StructurePerception perception, ClassShifts shifts, int index, Spectrum spectrum, ShiftPlausibilityOptions options)
     {
         var classes = perception.Equivalence.CarbonClasses13C;
-        var solventLines = new ResidualMatcher().Match(spectrum).Matches
-            .Where(m => m.Kind == ResidualMatchKind.ResidualSolvent).Select(m => m.SignalIndex).ToHashSet();
-        var counted = Enumerable.Range(0, spectrum.Signals.Count)
-            .Where(s => !spectrum.Signals[s].IsMinorSpecies() && !solventLines.Contains(s)).ToList();
+        var counted = CompoundLines(spectrum);
         var table = new ClassTable(
             "13C", shifts.Carbon, options.CarbonSlackPpm, options.CarbonFarPpm,
             c => [.. classes[c]],
@@ -65,30 +63,62 @@ public sealed class ShiftPlausibilityRule : Rule<ShiftPlausibilityOptions>
         return table.Judge(spectrum, index, counted, _ => null);
     }
 
+    /// <summary>13C lines judged: all but another species' lines and lines on the solvent's own residual line.</summary>
+    private static List<int> CompoundLines(Spectrum spectrum)
+    {
+        var onSolvent = new bool[spectrum.Signals.Count];
+        foreach (var match in new ResidualMatcher().Match(spectrum).Matches)
+        {
+            if (match.Kind == ResidualMatchKind.ResidualSolvent) onSolvent[match.SignalIndex] = true;
+        }
+
+        var counted = new List<int>(spectrum.Signals.Count);
+        for (var s = 0; s < spectrum.Signals.Count; s++)
+        {
+            if (!onSolvent[s] && !spectrum.Signals[s].IsMinorSpecies()) counted.Add(s);
+        }
+
+        return counted;
+    }
+
     /// <summary>
     /// For each compound signal, the structure classes its assigned classes stand for, together with every class
-    /// the solver could not tell from them (same size and coupling numbers): the solver does not read shifts, so
-    /// among interchangeable classes its choice says nothing.
+    /// the solver could not tell from them (same size and coupling numbers), in ascending order: the solver does
+    /// not read shifts, so among interchangeable classes its choice says nothing.
     /// </summary>
-    private static Dictionary<int, HashSet<int>> AssignedClasses(ProtonInterpretation interpretation)
+    private static Dictionary<int, IReadOnlyList<int>> AssignedClasses(ProtonInterpretation interpretation)
     {
-        var bySignal = new Dictionary<int, HashSet<int>>();
+        var bySignal = new Dictionary<int, IReadOnlyList<int>>();
         if (interpretation.Assignment is not { } assignment) return bySignal;
+        var twinSources = new List<int>?[interpretation.Classes.Count];
         for (var k = 0; k < interpretation.CompoundSignals.Count && k < assignment.ClassesBySignal.Count; k++)
         {
-            var sources = new HashSet<int>();
-            foreach (var input in assignment.ClassesBySignal[k].Select(c => interpretation.Classes[c]))
+            var sources = new List<int>();
+            foreach (var input in assignment.ClassesBySignal[k])
             {
-                foreach (var twin in interpretation.Classes.Where(input.IsInterchangeableWith))
+                foreach (var source in twinSources[input] ??= TwinSources(interpretation.Classes, input))
                 {
-                    if (twin.Source >= 0) sources.Add(twin.Source);
+                    if (!sources.Contains(source)) sources.Add(source);
                 }
             }
 
+            sources.Sort();
             if (sources.Count > 0) bySignal[interpretation.CompoundSignals[k]] = sources;
         }
 
         return bySignal;
+    }
+
+    /// <summary>The structure classes behind every solver input interchangeable with input <paramref name="input"/> (itself included).</summary>
+    private static List<int> TwinSources(IReadOnlyList<ClassInput> classes, int input)
+    {
+        var sources = new List<int>();
+        foreach (var twin in classes)
+        {
+            if (twin.Source >= 0 && classes[input].IsInterchangeableWith(twin) && !sources.Contains(twin.Source)) sources.Add(twin.Source);
+        }
+
+        return sources;
     }
 
     private static string Atoms(StructurePerception perception, IEnumerable<int> atoms) =>
