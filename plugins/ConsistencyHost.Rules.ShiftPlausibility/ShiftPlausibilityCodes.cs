@@ -12,6 +12,6 @@ public static class ShiftPlausibilityCodes
     /// <summary>A signal fits some class's window but not the window of the classes the assignment gave it (info by default).</summary>
     public const string AssignedClassOutside = "assigned-class-outside-window";
 
-    /// <summary>A non-exchangeable class has no reported signal inside its window (warning by default).</summary>
+    /// <summary>A non-exchangeable class has no reported signal inside its window (info by default: often an overlapped or unreported line).</summary>
     public const string ClassWithoutSignal = "class-without-plausible-signal";
 }
