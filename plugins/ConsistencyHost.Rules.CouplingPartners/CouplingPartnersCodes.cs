@@ -17,4 +17,10 @@ public static class CouplingPartnersCodes
 
     /// <summary>A reported range narrower or wider than the first-order multiplet it describes.</summary>
     public const string RangeWidthMismatch = "range-width-mismatch";
+
+    /// <summary>A first-order pattern with fewer splittings than the couplings of its protons that cannot vanish give (ethyl CH2 as a t).</summary>
+    public const string PatternTooFewLines = "pattern-too-few-lines";
+
+    /// <summary>A J larger than any coupling type the structure offers the signal's protons (16 Hz on a cis alkene).</summary>
+    public const string JOutsideCouplingTypes = "j-outside-coupling-types";
 }

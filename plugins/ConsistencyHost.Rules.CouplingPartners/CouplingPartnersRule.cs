@@ -27,6 +27,8 @@ public sealed class CouplingPartnersRule : Rule<CouplingPartnersOptions>
             foreach (var finding in PartnerSearch.Check(context, options)) yield return finding;
             foreach (var finding in LabelledPairs.Check(spectrum, i, options)) yield return finding;
             foreach (var finding in PatternFeasibility.Check(context)) yield return finding;
+            foreach (var finding in TreePatternCheck.Check(context)) yield return finding;
+            foreach (var finding in TreeJCheck.Check(context)) yield return finding;
             foreach (var finding in RangeWidthCheck.Check(spectrum, i, options)) yield return finding;
         }
     }

@@ -1,6 +1,8 @@
 using ConsistencyHost.Chemistry.Model;
+using ConsistencyHost.Chemistry.Perception.Symmetry;
 using ConsistencyHost.Sdk.Entries;
 using ConsistencyHost.Spectra.Analysis.Interpretation;
+using ConsistencyHost.Spectra.Analysis.Prediction.Coupling;
 using ConsistencyHost.Spectra.Model;
 
 namespace ConsistencyHost.Rules.CouplingPartners;
@@ -14,15 +16,20 @@ internal sealed record PartnerContext(
     int SpectrumIndex,
     IReadOnlyList<int> CompoundSignals,
     ProtonInterpretation? Interpretation,
-    Molecule? Molecule)
+    Molecule? Molecule,
+    EntryAnalysis Analysis,
+    NmrEquivalence? Equivalence)
 {
     public static PartnerContext Create(IEntryView entry, int spectrumIndex)
     {
         var spectrum = entry.Spectra[spectrumIndex];
         var interpretation = entry.Analysis.Protons(spectrumIndex);
         var compound = interpretation?.CompoundSignals ?? [.. Enumerable.Range(0, spectrum.Signals.Count)];
-        return new PartnerContext(spectrum, spectrumIndex, compound, interpretation, entry.Molecule);
+        return new PartnerContext(spectrum, spectrumIndex, compound, interpretation, entry.Molecule, entry.Analysis, entry.Perception?.Equivalence);
     }
+
+    /// <summary>The coupling tree of every hydrogen class, shared through the entry view (built once per entry).</summary>
+    public IReadOnlyList<CouplingTree>? Trees => Analysis.Couplings;
 
     /// <summary>What the partner search reads of each signal, in reported order (read once per spectrum).</summary>
     public IReadOnlyList<SignalFacts> Facts => _facts ??= [.. Spectrum.Signals.Select(SignalFacts.Of)];

@@ -14,14 +14,24 @@ internal static class PartnerSearch
     public static IEnumerable<Finding> Check(PartnerContext context, CouplingPartnersOptions options)
     {
         var signals = context.Spectrum.Signals;
+        var unpartnered = new List<(int Signal, double Hz)>();
         foreach (var a in context.CompoundSignals)
         {
             foreach (var coupling in signals[a].Couplings)
             {
                 if (coupling.IsHeteronuclear || coupling.Hz < options.SmallestPartneredJHz) continue;
                 if (HasPartner(context, a, coupling.Hz, options)) continue;
-                yield return Unpartnered(context, a, coupling.Hz, options);
+                unpartnered.Add((a, coupling.Hz));
             }
+        }
+
+        // Two unpartnered J that can only be one coupling are one mismatch between two signals.
+        var pairs = InferredPairs.Find(context, unpartnered);
+        foreach (var pair in pairs) yield return InferredPairs.Finding(context, pair);
+        foreach (var (a, hz) in unpartnered)
+        {
+            if (pairs.Exists(p => (p.A == a && p.HzA == hz) || (p.B == a && p.HzB == hz))) continue;
+            yield return Unpartnered(context, a, hz, options);
         }
     }
 

@@ -30,7 +30,7 @@ internal static class PatternFeasibility
         }
     }
 
-    private static bool CountsMatch(Spectra.Analysis.Interpretation.ProtonInterpretation interpretation, AssignmentResult assignment)
+    internal static bool CountsMatch(Spectra.Analysis.Interpretation.ProtonInterpretation interpretation, AssignmentResult assignment)
     {
         for (var k = 0; k < interpretation.CompoundSignals.Count; k++)
         {

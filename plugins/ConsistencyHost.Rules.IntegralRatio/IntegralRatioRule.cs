@@ -83,15 +83,20 @@ public sealed class IntegralRatioRule : Rule<IntegralRatioOptions>
     {
         foreach (var signal in interpretation.CompoundSignals)
         {
-            if (spectrum.Signals[signal].ProtonCount is { } count && Math.Abs(count - Math.Round(count)) > options.FractionTolerance)
+            // A rotamer pair's shares are summed first: only a sum that is still fractional was rounded.
+            var count = signal < interpretation.StatedCounts.Count ? interpretation.StatedCounts[signal] : spectrum.Signals[signal].ProtonCount;
+            if (count is { } n && Math.Abs(n - Math.Round(n)) > options.FractionTolerance)
             {
                 yield return new Finding(IntegralRatioCodes.FractionalCount, Severity.Info,
-                        Text($"The signal at {spectrum.Signals[signal].Describe()} is reported with {count} H, not a whole number; it was read as {Math.Round(count)} H."))
+                        Text($"The signal at {spectrum.Signals[signal].Describe()} is reported with {n} H{Shares(interpretation, signal)}, not a whole number; it was read as {Math.Round(n)} H."))
                     { Peaks = [new PeakRef(index, signal)] }
-                    .WithEvidence("observed_h", count);
+                    .WithEvidence("observed_h", n);
             }
         }
     }
+
+    private static string Shares(ProtonInterpretation interpretation, int signal) =>
+        interpretation.RotamerPairs.Values.Contains(signal) ? " (with its minor-rotamer signal)" : "";
 
     private static List<int> ImpossibleSignals(ProtonInterpretation interpretation)
     {

@@ -35,7 +35,7 @@ public sealed class CheckEngine
         _profiles = ProfileResolver.ResolveAll(options, Rules);
         _intake = new EntryIntake(limits ?? IntakeLimits.Default);
         _isolated = isolatedExecutor;
-        _runner = new RuleRunner(isolatedExecutor);
+        _runner = new RuleRunner(isolatedExecutor, options.ReportLimits);
     }
 
     /// <summary>Where a loaded rule runs: "in-process" or "worker".</summary>
@@ -80,7 +80,9 @@ public sealed class CheckEngine
     private CheckReport Run(EntrySubmission submission, CancellationToken cancellationToken)
     {
         var profile = ResolveProfile(submission.Profile);
-        var entry = _intake.Build(submission);
+        // Strict when the request or the profile asks; otherwise unreadable fragments become findings.
+        List<ReportedFinding>? textNotes = submission.StrictText || profile.StrictText ? null : [];
+        var entry = _intake.Build(submission, textNotes);
         if (profile.Rules.Any(rule => !_runner.RunsIsolated(rule)))
         {
             SharedPerception.Prepare(entry);
@@ -91,7 +93,7 @@ public sealed class CheckEngine
         {
             EntryId = submission.EntryId,
             Profile = profile.Name,
-            Findings = [.. findings.OrderBy(f => f.RuleId, StringComparer.Ordinal)],
+            Findings = [.. (textNotes is { Count: > 0 } ? findings.Concat(textNotes) : findings).OrderBy(f => f.RuleId, StringComparer.Ordinal)],
             RuleRuns = [.. runs.OrderBy(r => r.RuleId, StringComparer.Ordinal)],
             Structure = entry.Perception is { } perception
                 ? new StructureSummary(perception.Formula.Hill, perception.Molecule.AtomCount, perception.Formula.MonoisotopicMass)

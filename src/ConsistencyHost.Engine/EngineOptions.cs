@@ -49,4 +49,7 @@ public sealed record EngineOptions
 
     /// <summary>Configured profiles; a "default" profile with every rule at its defaults is added when absent.</summary>
     public IReadOnlyList<Profile> Profiles { get; init; } = [];
+
+    /// <summary>How many findings and characters one rule may report (configuration section <c>ReportLimits</c>).</summary>
+    public Running.ReportLimits ReportLimits { get; init; } = Running.ReportLimits.Default;
 }

@@ -66,6 +66,7 @@ internal static class WorkerDescriptions
             Plugin = plugin,
             AssemblyPath = assemblyPath,
             OptionSchema = [.. rule.Options.Select(o => new RuleOptionInfo(o.Name, o.Type, o.DefaultValue))],
+            FindingCodes = [.. rule.FindingCodes],
             WorkerBindings = bindings,
         };
     }

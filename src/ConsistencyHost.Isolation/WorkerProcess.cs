@@ -61,6 +61,9 @@ internal sealed class WorkerProcess : IAsyncDisposable
             var (path, problem) = WorkerHandshake.Parse(line);
             if (problem is not null) throw new WorkerStartException($"{problem}{stderr.Describe()}");
             if (path != socket) throw new WorkerStartException($"the worker listens on '{path}', not on the socket it was given");
+            // After the handshake nothing on standard output is read; drain it so a plugin that writes there
+            // cannot block on a full pipe (standard error is drained by StderrTail).
+            _ = process.StandardOutput.BaseStream.CopyToAsync(Stream.Null, CancellationToken.None);
             var channel = Connect(socket);
             var invoker = channel.Intercept(metadata =>
             {

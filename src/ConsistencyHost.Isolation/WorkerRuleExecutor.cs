@@ -61,6 +61,10 @@ public sealed class WorkerRuleExecutor : IRuleExecutor, IAsyncDisposable, IDispo
     public string? HeldBackReason(RuleDescriptor rule) => _ledger.QuarantineReason(rule.AssemblyPath);
 
     /// <inheritdoc />
+    /// <remarks>Counted like a worker loss: a plugin that keeps flooding reports is quarantined.</remarks>
+    public void ReportOverLimit(RuleDescriptor rule, string reason) => _ledger.Record(rule.AssemblyPath, reason);
+
+    /// <inheritdoc />
     public async ValueTask DisposeAsync()
     {
         foreach (var worker in _workers.Values)

@@ -28,6 +28,7 @@ internal static class RuleDescriber
     {
         var description = new RuleDescription { Id = rule.Id, Version = rule.Version, Title = rule.Title, LoadMessage = rule.LoadMessage };
         description.Nuclei.AddRange(rule.Nuclei);
+        description.FindingCodes.AddRange(rule.FindingCodes);
         description.Options.AddRange(rule.OptionSchema.Select(o => new OptionDescription { Name = o.Name, Type = o.Type, DefaultValue = o.Default }));
         if (!rule.IsLoaded)
         {

@@ -44,7 +44,9 @@ internal sealed class RuleWorkerService(LoadedPlugin plugin) : RuleWorker.RuleWo
 
     private RunRuleResponse Run(RuleDescriptor rule, RunRuleRequest request, CancellationToken callToken)
     {
-        var entry = _intake.Build(SubmissionMapper.ToSubmission(request.Entry));
+        // Read leniently: the host has already refused the entry if it asked for strict reading, and a lenient read
+        // of text that reads strictly gives the same entry.
+        var entry = _intake.Build(SubmissionMapper.ToSubmission(request.Entry), textNotes: []);
         var options = JsonSerializer.Deserialize(request.OptionsJson, rule.OptionsType!)
                       ?? throw new JsonException($"options for '{rule.Id}' deserialised to null");
         // As in the host: the perception every rule shares is not this rule's work, so it is done before its clock starts.

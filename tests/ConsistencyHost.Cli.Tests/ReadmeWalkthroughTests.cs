@@ -28,7 +28,7 @@ public sealed partial class ReadmeWalkthroughTests : IDisposable
     public async Task Walkthrough_ServeThenCurlFromSamples_ReturnsTheReportWithTheSolventFinding()
     {
         Assert.True(ReadmeServe().IsMatch(await ReadAsync("README.md")), "README has no serve command");
-        Assert.True(File.Exists(Curl), $"{Curl} is missing: install Debian's curl (see .ci/run)");
+        Assert.True(File.Exists(Curl), $"{Curl} is missing: install Debian's curl (tests/setup/debian-packages.sh)");
         var curlDoc = await ReadAsync(Path.Combine("samples", "clients", "curl.md"));
         var command = CurlCheck().Match(curlDoc);
         Assert.True(command.Success, "samples/clients/curl.md has no curl POST command");

@@ -15,10 +15,6 @@ internal static class PublishedEntries
 
     private static IReadOnlyList<PublishedEntry> Read()
     {
-        var path = Path.Combine(AppContext.BaseDirectory, "Fixtures", "published-impurities.tsv");
-        return [.. File.ReadLines(path)
-            .Where(line => line.Length > 0 && !line.StartsWith('#'))
-            .Select(line => line.Split('\t'))
-            .Select(cells => new PublishedEntry(cells[0], cells[1], cells[2], cells[3]))];
+        return [.. FixtureTsv.Rows("published-impurities.tsv").Select(cells => new PublishedEntry(cells[0], cells[1], cells[2], cells[3]))];
     }
 }

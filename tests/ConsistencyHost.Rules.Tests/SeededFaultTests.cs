@@ -18,6 +18,9 @@ public sealed class SeededFaultTests
         { "water counted", "2-propanol", "DMSO-d6", "1.04 (d, J = 6 Hz, 6H)", "3.33 (s, 2H), 1.04 (d, J = 6 Hz, 6H)", "solvent-residual", "water-reported" },
         { "multiplicity changed", "ethyl acetate", "DMSO-d6", "1.17 (t, J = 7 Hz, 3H)", "1.17 (q, J = 7 Hz, 3H)", "coupling-partners", "multiplicity-impossible" },
         { "J count does not fit letters", "2-propanol", "CDCl3", "1.22 (d, J = 6 Hz, 6H)", "1.22 (dd, J = 6 Hz, 6H)", "coupling-partners", "j-count-mismatch" },
+        { "q→t on the ethyl CH2", "ethyl acetate", "CDCl3", "4.12 (q, J = 7 Hz, 2H)", "4.12 (t, J = 7 Hz, 2H)", "coupling-partners", "pattern-too-few-lines" },
+        { "q→t on the ethyl CH2", "diethyl ether", "DMSO-d6", "3.38 (q, J = 7 Hz, 4H)", "3.38 (t, J = 7 Hz, 4H)", "coupling-partners", "pattern-too-few-lines" },
+        { "sept→q on the isopropyl CH", "2-propanol", "CDCl3", "4.04 (sept, J = 6 Hz, 1H)", "4.04 (q, J = 6 Hz, 1H)", "coupling-partners", "pattern-too-few-lines" },
         { "count no class makes", "tetrahydrofuran", "CDCl3", "3.76 (m, 4H), 1.85 (m, 4H)", "3.76 (m, 5H), 1.85 (m, 3H)", "integral-ratio", "impossible-signal-count" },
     };
 

@@ -60,5 +60,5 @@ public sealed class DocsExamplesTests
     }
 
     [Fact]
-    public void Docs_ExampleCount_IsThree() => Assert.Equal(3, ReportedExamples().Count);
+    public void Docs_ExampleCount_IsFour() => Assert.Equal(4, ReportedExamples().Count);
 }

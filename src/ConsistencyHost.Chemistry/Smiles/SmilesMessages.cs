@@ -14,6 +14,8 @@ public static class SmilesMessages
     public const string UnmatchedCloseBranch = "')' without a matching '('.";
     public const string BranchWithoutAtom = "'(' must follow an atom.";
     public const string EmptyBranch = "Empty branch '()'; expected an atom inside.";
+    public const string BondBeforeBranch = "Bond '{0}' written before '('; expected it inside the branch, before its first atom.";
+    public const string BranchOpensBranch = "Branch '(' opened directly inside another; expected an atom or a bond after '('.";
     public const string UnclosedRing = "Ring bond {0} opened here is never closed.";
     public const string RingBondConflict = "Ring bond {0} is written with two different bond symbols.";
     public const string RingToSelf = "Ring bond {0} would bond an atom to itself.";

@@ -157,6 +157,20 @@ internal sealed class SmilesParser
             problems.Add(Error(SmilesMessages.EmptyBranch, i));
         }
 
+        // OpenSMILES: a branch holds a chain, and a chain starts with an atom (after an optional bond or dot), so
+        // "((" is never a nested branch; read leniently, C(((((C))))) would silently become ethane.
+        if (i > 0 && text[i - 1] == '(')
+        {
+            problems.Add(Error(SmilesMessages.BranchOpensBranch, i));
+        }
+
+        // A bond belongs to the atom after it, inside the branch ("C(=O)"), never before '(' ("C=(O)").
+        if (!pending.IsImplicit)
+        {
+            problems.Add(Error(SmilesMessages.Format(SmilesMessages.BondBeforeBranch, pending.Symbol), pending.Offset));
+            pending = BondSymbol.Implicit;
+        }
+
         branches.Push((previous, i));
     }
 

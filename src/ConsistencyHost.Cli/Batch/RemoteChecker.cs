@@ -10,7 +10,8 @@ namespace ConsistencyHost.Cli.Batch;
 /// <summary>
 /// Checks entries on one or more running hosts through <see cref="ReplicaDispatcher"/>: one CheckEntries stream
 /// per host, entries resubmitted elsewhere when a host is lost, one report per entry in completion order (input
-/// order with a single host). Unreadable items are not sent; their input-error reply is made here.
+/// order with a single host, unreadable items included). Unreadable items are not sent; their input-error reply
+/// is made here.
 /// </summary>
 internal sealed class RemoteChecker(ReplicaDispatcher dispatcher) : IBatchChecker
 {
@@ -20,22 +21,28 @@ internal sealed class RemoteChecker(ReplicaDispatcher dispatcher) : IBatchChecke
     public async IAsyncEnumerable<(BatchItem Item, CheckEntryResponse Response)> CheckAsync(
         IEnumerable<BatchItem> items, [EnumeratorCancellation] CancellationToken cancellationToken)
     {
-        var waiting = new ConcurrentDictionary<string, BatchItem>(StringComparer.Ordinal);
-        var unreadable = new ConcurrentQueue<BatchItem>();
+        var waiting = new ConcurrentDictionary<string, (BatchItem Item, int Position)>(StringComparer.Ordinal);
+        var unreadable = new ConcurrentQueue<(BatchItem Item, int Position)>();
+        // One host answers in input order, and so must the reports: an unreadable item is known as soon as the
+        // dispatcher reads past it, so it waits here for the entries before it.
+        var order = new InputOrder(inOrder: dispatcher.Targets.Count == 1);
         var run = dispatcher.Dispatch(Sendable(items, waiting, unreadable).ToAsyncEnumerable());
         await using (var reports = run.GetAsyncEnumerator(cancellationToken))
         {
             while (await NextAsync(reports))
             {
-                while (unreadable.TryDequeue(out var bad)) yield return (bad, InputError(bad));
+                while (unreadable.TryDequeue(out var bad)) order.Add(bad.Position, bad.Item, InputError(bad.Item));
                 var response = reports.Current;
-                yield return waiting.TryRemove(response.EntryId, out var item)
-                    ? (item, response)
+                var (item, position) = waiting.TryRemove(response.EntryId, out var found)
+                    ? found
                     : throw new InvalidOperationException($"the dispatcher reported entry '{response.EntryId}', which is not waiting");
+                order.Add(position, item, response);
+                foreach (var ready in order.Ready()) yield return ready;
             }
         }
 
-        while (unreadable.TryDequeue(out var bad)) yield return (bad, InputError(bad));
+        while (unreadable.TryDequeue(out var bad)) order.Add(bad.Position, bad.Item, InputError(bad.Item));
+        foreach (var ready in order.Ready()) yield return ready;
         Summary = run.Summary;
     }
 
@@ -52,17 +59,18 @@ internal sealed class RemoteChecker(ReplicaDispatcher dispatcher) : IBatchChecke
     }
 
     private static IEnumerable<CheckEntryRequest> Sendable(
-        IEnumerable<BatchItem> items, ConcurrentDictionary<string, BatchItem> waiting, ConcurrentQueue<BatchItem> unreadable)
+        IEnumerable<BatchItem> items, ConcurrentDictionary<string, (BatchItem, int)> waiting, ConcurrentQueue<(BatchItem, int)> unreadable)
     {
+        var position = 0;
         foreach (var item in items)
         {
             if (item.Request is null)
             {
-                unreadable.Enqueue(item);
+                unreadable.Enqueue((item, position++));
                 continue;
             }
 
-            waiting[item.Request.EntryId] = item;
+            waiting[item.Request.EntryId] = (item, position++);
             yield return item.Request;
         }
     }

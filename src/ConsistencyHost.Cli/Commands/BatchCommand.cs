@@ -23,18 +23,19 @@ internal static class BatchCommand
         ["--ca-cert"] = "--ca-cert",
     };
 
-    public const string Usage = "batch (DIR | FILE.sdf) --out DIR [--profile NAME] [--config FILE] [--plugins DIR]\n" +
+    public const string Usage = "batch (DIR | FILE.sdf) --out DIR [--profile NAME] [--strict] [--config FILE] [--plugins DIR]\n" +
         "      [--server URL[,URL...] [--api-key-file PATH] [--ca-cert PATH]]   (key also from env CONSISTENCYHOST_API_KEY)";
 
     public static async Task<int> RunAsync(IReadOnlyList<string> raw, TextWriter stdout)
     {
-        var args = ParsedArguments.Parse(raw, Valued, []);
+        var args = ParsedArguments.Parse(raw, Valued, ["--strict"]);
         var (input, source) = OpenSource(args);
         var outFolder = args.Value("--out") ?? throw new UsageException("batch needs --out DIR for reports.jsonl and report.html");
         var total = source.Count();
         if (total == 0) throw new UsageException($"'{input}' holds no entries (expected *.json entry files or SD records)");
         var profile = args.Value("--profile");
-        var items = source.Read().Select(item => WithProfile(item, profile));
+        var strict = args.Has("--strict");
+        var items = source.Read().Select(item => WithProfile(item, profile, strict));
 
         if (!args.Has("--server") && (args.Has("--api-key-file") || args.Has("--ca-cert")))
         {
@@ -92,9 +93,11 @@ internal static class BatchCommand
         return RemoteHosts.Open(args);
     }
 
-    private static BatchItem WithProfile(BatchItem item, string? profile)
+    private static BatchItem WithProfile(BatchItem item, string? profile, bool strictText)
     {
         if (profile is not null && item.Request is { } request) request.Profile = profile;
+        // --strict refuses entries with unreadable text; without it each entry keeps its own strict_text.
+        if (strictText && item.Request is { } strictRequest) strictRequest.StrictText = true;
         return item;
     }
 }

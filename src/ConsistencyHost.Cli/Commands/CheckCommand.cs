@@ -29,11 +29,13 @@ internal static class CheckCommand
 
     public const string Usage =
         "check [ENTRY.json] [--smiles TEXT | --molfile PATH] [--data TEXT]... [--jcamp PATH] [--nmredata PATH] [--formula F]\n" +
-        "      [--id ENTRY_ID] [--profile NAME] [--format text|json] [--plugins DIR] [--config FILE]";
+        "      [--id ENTRY_ID] [--profile NAME] [--strict] [--format text|json] [--plugins DIR] [--config FILE]\n" +
+        "      Reported text is read leniently: an unreadable fragment is a text-unreadable warning and the rest is\n" +
+        "      checked; --strict refuses the entry instead (exit 2).";
 
     public static int Run(IReadOnlyList<string> raw, TextWriter stdout)
     {
-        var args = ParsedArguments.Parse(raw, Valued, []);
+        var args = ParsedArguments.Parse(raw, Valued, ["--strict"]);
         var format = OutputFormats.Parse(args.Value("--format"));
         var request = BuildRequest(args);
         var engine = EngineFactory.Create(args);
@@ -66,6 +68,7 @@ internal static class CheckCommand
         if (args.Value("--nmredata") is { } nmredata) request.NmredataRecord = ReadFile(nmredata, "--nmredata");
         if (args.Value("--formula") is { } formula) (request.Claims ??= new Claims()).Formula = formula;
         if (args.Value("--profile") is { } profile) request.Profile = profile;
+        if (args.Has("--strict")) request.StrictText = true;
         if (args.Value("--id") is { } id) request.EntryId = id;
         if (request.EntryId.Length == 0) request.EntryId = args.Positional.Count == 1 ? Path.GetFileNameWithoutExtension(args.Positional[0]) : "entry";
         return request;

@@ -65,6 +65,7 @@ internal static class EnvironmentsCommand
                 WriteRange(json, "expected1H", report.Expected1H);
                 WriteRange(json, "expected13C", report.Expected13C);
                 if (shifts is not null) ShiftWindowsOutput.Json(json, shifts);
+                CouplingTreeOutput.Json(json, CouplingTreeOutput.Of(item.Molecule!));
             }
 
             json.WriteEndObject();
@@ -105,7 +106,8 @@ internal static class EnvironmentsCommand
         text.Append(CultureInfo.InvariantCulture, $"  heavy-atom classes ({report.HeavyAtomClasses.Count}): {Classes(report.HeavyAtomClasses)}\n");
         text.Append(CultureInfo.InvariantCulture, $"  13C classes ({report.CarbonClasses13C.Count}): {Classes(report.CarbonClasses13C)}\n");
         text.Append(CultureInfo.InvariantCulture, $"  1H classes ({report.HydrogenClasses.Count}): {Classes(report.HydrogenClasses)}\n");
-        text.Append(Range("1H", report.Expected1H)).Append(Range("13C", report.Expected13C)).Append('\n');
+        text.Append(Range("1H", report.Expected1H)).Append(Range("13C", report.Expected13C));
+        text.Append("  coupling trees:\n").Append(CouplingTreeOutput.Text(CouplingTreeOutput.Of(item.Molecule!))).Append('\n');
         return text.ToString();
     }
 

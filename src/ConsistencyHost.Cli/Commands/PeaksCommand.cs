@@ -23,26 +23,30 @@ internal static class PeaksCommand
         ["--format"] = "--format",
     };
 
-    public const string Usage = "peaks (--data TEXT | --jcamp PATH | --nmredata PATH) [--format text|json]";
+    public const string Usage = "peaks (--data TEXT | --jcamp PATH | --nmredata PATH) [--lenient] [--format text|json]\n" +
+        "      --lenient prints what was read and lists each unreadable fragment on stderr instead of refusing the text.";
 
     public static int Run(IReadOnlyList<string> raw, TextWriter stdout)
     {
-        var args = ParsedArguments.Parse(raw, Valued, []);
+        var args = ParsedArguments.Parse(raw, Valued, ["--lenient"]);
         var format = OutputFormats.Parse(args.Value("--format"));
-        var (spectra, hrms) = Read(args);
+        var (spectra, hrms) = Read(args, Console.Error);
         stdout.Write(format == OutputFormat.Json ? Json(spectra, hrms) + "\n" : Text(spectra, hrms));
         return ExitCodes.Ok;
     }
 
-    private static (List<Spectrum> Spectra, List<HrmsClaim> Hrms) Read(ParsedArguments args)
+    private static (List<Spectrum> Spectra, List<HrmsClaim> Hrms) Read(ParsedArguments args, TextWriter stderr)
     {
+        var lenient = args.Has("--lenient");
         var spectra = new List<Spectrum>();
         var hrms = new List<HrmsClaim>();
         try
         {
             foreach (var (text, i) in args.Values("--data").Select((t, i) => (t, i)))
             {
-                var read = EntryTextReaders.ReadReportedText(text, $"--data[{i}]");
+                var read = lenient
+                    ? EntryTextReaders.ReadReportedTextLeniently(text, $"--data[{i}]", note => stderr.WriteLine(note))
+                    : EntryTextReaders.ReadReportedText(text, $"--data[{i}]");
                 spectra.AddRange(read.Spectra);
                 hrms.AddRange(read.Hrms);
             }

@@ -19,6 +19,7 @@ public static class SubmissionMapper
         Formula = request.Claims?.Formula,
         Hrms = request.Claims is null ? [] : [.. request.Claims.Hrms.Select(ToHrms)],
         Profile = request.Profile,
+        StrictText = request.StrictText,
     };
 
     private static Spectra.Model.HrmsClaim ToHrms(V1.HrmsClaim claim, int index) => new(

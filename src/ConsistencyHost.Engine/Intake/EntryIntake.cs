@@ -1,3 +1,4 @@
+using ConsistencyHost.Engine.Reports;
 using ConsistencyHost.Sdk.Entries;
 using ConsistencyHost.Spectra.Model;
 
@@ -9,20 +10,26 @@ namespace ConsistencyHost.Engine.Intake;
 /// </summary>
 public sealed class EntryIntake(IntakeLimits limits)
 {
-    /// <summary>Builds the entry or throws <see cref="EntryInputException"/>.</summary>
-    public Entry Build(EntrySubmission submission)
+    /// <summary>Builds the entry or throws <see cref="EntryInputException"/>; reads text strictly when the submission asks.</summary>
+    public Entry Build(EntrySubmission submission) => Build(submission, submission.StrictText ? null : []);
+
+    /// <summary>
+    /// Builds the entry or throws <see cref="EntryInputException"/>. With <paramref name="textNotes"/> reported text is
+    /// read leniently and each unreadable fragment is added there as a finding; null reads strictly.
+    /// </summary>
+    public Entry Build(EntrySubmission submission, List<ReportedFinding>? textNotes)
     {
         CheckSizes(submission);
         var spectra = new List<Spectrum>();
         for (var i = 0; i < submission.Spectra.Count; i++)
         {
-            spectra.Add(ReadSpectrum(submission.Spectra[i], $"spectra[{i}]"));
+            spectra.Add(ReadSpectrum(submission.Spectra[i], $"spectra[{i}]", textNotes));
         }
 
         var hrms = new List<HrmsClaim>(submission.Hrms);
         for (var i = 0; i < submission.ReportedText.Count; i++)
         {
-            var read = ReportedTextIntake.Read(submission.ReportedText[i], $"reported_text[{i}]");
+            var read = ReportedTextIntake.Read(submission.ReportedText[i], $"reported_text[{i}]", textNotes);
             spectra.AddRange(read.Spectra);
             hrms.AddRange(read.Hrms);
         }
@@ -50,7 +57,7 @@ public sealed class EntryIntake(IntakeLimits limits)
         };
     }
 
-    private Spectrum ReadSpectrum(SpectrumSubmission input, string field)
+    private Spectrum ReadSpectrum(SpectrumSubmission input, string field, List<ReportedFinding>? textNotes)
     {
         var forms = (input.Signals is null ? 0 : 1) + (input.ReportedText is null ? 0 : 1) + (input.JcampDx is null ? 0 : 1);
         if (forms != 1)
@@ -58,13 +65,15 @@ public sealed class EntryIntake(IntakeLimits limits)
             throw new EntryInputException(field, "give exactly one of peaks, reported_text or jcamp_dx");
         }
 
+        NumericRanges.CheckConditions(input, field);
+
         if (input.ReportedText is not null || input.JcampDx is not null)
         {
             var text = input.ReportedText ?? input.JcampDx!;
             var name = input.ReportedText is not null ? "reported_text" : "jcamp_dx";
             CheckLength(text, $"{field}.{name}");
             var read = input.ReportedText is not null
-                ? ReportedTextIntake.ReadOne(text, $"{field}.{name}")
+                ? ReportedTextIntake.ReadOne(text, $"{field}.{name}", textNotes)
                 : JcampIntake.ReadOne(text, $"{field}.{name}");
             return Merge(read, input);
         }
@@ -108,6 +117,8 @@ public sealed class EntryIntake(IntakeLimits limits)
             {
                 throw new EntryInputException($"{field}[{i}]", "has a shift outside -100..1000 ppm or not a finite number");
             }
+
+            NumericRanges.CheckPeak(s, $"{field}[{i}]");
         }
     }
 
@@ -136,9 +147,17 @@ public sealed class EntryIntake(IntakeLimits limits)
             }
         }
 
+        // Name the field that carries the excess, so 30,000 text blocks are not reported under "spectra".
         if (submission.Spectra.Count + submission.ReportedText.Count > limits.MaxSpectra)
         {
-            throw new EntryInputException("spectra", $"the entry has more than {limits.MaxSpectra} spectra or text blocks");
+            var field = submission.ReportedText.Count > submission.Spectra.Count ? "reported_text" : "spectra";
+            throw new EntryInputException(field,
+                $"the entry has {submission.Spectra.Count} spectra and {submission.ReportedText.Count} text blocks; the limit is {limits.MaxSpectra} together");
+        }
+
+        for (var i = 0; i < submission.Hrms.Count; i++)
+        {
+            NumericRanges.CheckHrms(submission.Hrms[i], $"claims.hrms[{i}]");
         }
 
         for (var i = 0; i < submission.ReportedText.Count; i++)

@@ -29,6 +29,12 @@ public sealed record EntrySubmission
 
     /// <summary>The profile to apply; null or empty for the default.</summary>
     public string? Profile { get; init; }
+
+    /// <summary>
+    /// True refuses the entry when any fragment of reported text cannot be read; false (the default) reports each
+    /// such fragment as a finding and checks the rest.
+    /// </summary>
+    public bool StrictText { get; init; }
 }
 
 /// <summary>One spectrum as submitted: acquisition facts plus exactly one data form.</summary>

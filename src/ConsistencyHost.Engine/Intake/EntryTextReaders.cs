@@ -14,6 +14,22 @@ public static class EntryTextReaders
     /// <summary>Reads a characterisation block (NMR lines and HRMS lines).</summary>
     public static ReportedTextResult ReadReportedText(string text, string field) => ReportedTextIntake.Read(text, field);
 
+    /// <summary>
+    /// Reads a characterisation block leniently: each unreadable fragment and each skipped prose clause is passed
+    /// to <paramref name="note"/> as one sentence ("warning text-unreadable: …"), and everything readable is returned.
+    /// </summary>
+    public static ReportedTextResult ReadReportedTextLeniently(string text, string field, Action<string> note)
+    {
+        var notes = new List<Reports.ReportedFinding>();
+        var result = ReportedTextIntake.Read(text, field, notes);
+        foreach (var n in notes)
+        {
+            note($"{n.Finding.Severity.ToString().ToLowerInvariant()} {n.Finding.Code}: {n.Finding.Message}");
+        }
+
+        return result;
+    }
+
     /// <summary>Reads every NMR peak table of a JCAMP-DX document.</summary>
     public static IReadOnlyList<Spectrum> ReadJcamp(string text, string field)
     {

@@ -224,6 +224,7 @@ public static class PluginDiscovery
             Plugin = plugin,
             OptionsType = probe.OptionsType,
             OptionSchema = schema,
+            FindingCodes = DeclaredCodes.Of(type.Assembly),
             AssemblyPath = type.Assembly.Location,
             Factory = () => (IRule)Activator.CreateInstance(type)!,
         };

@@ -41,6 +41,12 @@ public sealed record RuleDescriptor
     /// </summary>
     public IReadOnlyDictionary<string, BoundOptions>? WorkerBindings { get; init; }
 
+    /// <summary>
+    /// The finding codes the plugin declares (constants of its <c>…Codes</c> classes, as the SDK asks), so a profile's
+    /// severity override naming no such code is refused at start; empty when the plugin declares none that way.
+    /// </summary>
+    public IReadOnlyList<string> FindingCodes { get; init; } = [];
+
     /// <summary>Full path of the plugin assembly (a worker loads this file); empty when refused.</summary>
     public string AssemblyPath { get; init; } = "";
 

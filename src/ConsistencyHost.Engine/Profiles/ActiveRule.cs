@@ -15,4 +15,7 @@ public sealed record ActiveRule(
     TimeSpan Deadline);
 
 /// <summary>A profile resolved against the loaded rules.</summary>
-public sealed record ResolvedProfile(string Name, IReadOnlyList<ActiveRule> Rules);
+/// <param name="Name">The profile's name.</param>
+/// <param name="Rules">Its active rules.</param>
+/// <param name="StrictText">True refuses entries whose reported text has an unreadable fragment (see <see cref="Profile.StrictText"/>).</param>
+public sealed record ResolvedProfile(string Name, IReadOnlyList<ActiveRule> Rules, bool StrictText = false);

@@ -20,8 +20,9 @@ namespace ConsistencyHost.Engine.Profiles;
 /// </example>
 public static class EngineConfiguration
 {
-    private static readonly string[] RootKeys = ["PluginsPath", "DefaultProfile", "RuleDeadlineMs", "Profiles", "TrustedPlugins", "Isolation"];
-    private static readonly string[] ProfileKeys = ["OnlyListedRules", "Rules"];
+    private static readonly string[] RootKeys = ["PluginsPath", "DefaultProfile", "RuleDeadlineMs", "Profiles", "TrustedPlugins", "Isolation", "ReportLimits"];
+    private static readonly string[] ReportLimitKeys = ["MaxFindingsPerRule", "MaxMessageChars", "MaxReplyBytes"];
+    private static readonly string[] ProfileKeys = ["OnlyListedRules", "StrictText", "Rules"];
     private static readonly string[] RuleKeys = ["Enabled", "DeadlineMs", "Options", "Severities"];
 
     /// <summary>Reads the options; <paramref name="defaultPluginsPath"/> applies when the section names none.</summary>
@@ -36,8 +37,30 @@ public static class EngineConfiguration
             RuleDeadline = ReadMilliseconds(section, "RuleDeadlineMs", problems) ?? TimeSpan.FromSeconds(2),
             Profiles = [.. section.GetSection("Profiles").GetChildren().Select(p => ReadProfile(p, problems))],
             TrustedPlugins = ReadTrusted(section.GetSection("TrustedPlugins")),
+            ReportLimits = ReadReportLimits(section.GetSection("ReportLimits"), problems),
         };
         return problems.Count == 0 ? options : throw new ProfileConfigurationException(problems);
+    }
+
+    /// <summary>Each limit a positive whole number; an absent one keeps its default.</summary>
+    private static Running.ReportLimits ReadReportLimits(IConfigurationSection section, List<string> problems)
+    {
+        CheckKeys(section, ReportLimitKeys, problems);
+        var defaults = Running.ReportLimits.Default;
+        int Read(string key, int fallback)
+        {
+            if (section[key] is not { } text) return fallback;
+            if (int.TryParse(text, NumberStyles.None, CultureInfo.InvariantCulture, out var value) && value > 0) return value;
+            problems.Add($"{section.Path}:{key}: '{Running.ReportLimits.Cut(text, 40)}' is not a positive whole number");
+            return fallback;
+        }
+
+        return new Running.ReportLimits
+        {
+            MaxFindingsPerRule = Read("MaxFindingsPerRule", defaults.MaxFindingsPerRule),
+            MaxMessageChars = Read("MaxMessageChars", defaults.MaxMessageChars),
+            MaxReplyBytes = Read("MaxReplyBytes", defaults.MaxReplyBytes),
+        };
     }
 
     /// <summary>An absent list keeps the built-in plugins trusted; a present one replaces that default.</summary>
@@ -53,6 +76,7 @@ public static class EngineConfiguration
         {
             Name = section.Key,
             OnlyListedRules = ReadBool(section, "OnlyListedRules", problems) ?? false,
+            StrictText = ReadBool(section, "StrictText", problems) ?? false,
             Rules = section.GetSection("Rules").GetChildren().ToDictionary(r => r.Key, r => ReadRule(r, problems), StringComparer.Ordinal),
         };
     }

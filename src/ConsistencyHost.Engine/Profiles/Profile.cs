@@ -17,6 +17,12 @@ public sealed record Profile
     /// <summary>When true, only the rules listed in <see cref="Rules"/> (and enabled there) run.</summary>
     public bool OnlyListedRules { get; init; }
 
+    /// <summary>
+    /// True refuses an entry whose reported text holds a fragment the reader cannot understand (exit 2 /
+    /// INVALID_ARGUMENT); false (the default) reports each such fragment as a <c>text-unreadable</c> warning.
+    /// </summary>
+    public bool StrictText { get; init; }
+
     /// <summary>Per-rule settings by rule id.</summary>
     public IReadOnlyDictionary<string, RuleSettings> Rules { get; init; } = new Dictionary<string, RuleSettings>();
 }

@@ -49,6 +49,7 @@ public static class ProfileResolver
                 continue;
             }
 
+            problems.AddRange(UnknownCodes(rule, settings).Select(p => $"profile '{profile.Name}', rule '{rule.Id}': {p}"));
             var (bound, optionProblems) = Bind(rule, profile.Name, settings);
             problems.AddRange(optionProblems.Select(p => $"profile '{profile.Name}', rule '{rule.Id}': {p}"));
             if (bound is not null)
@@ -57,7 +58,23 @@ public static class ProfileResolver
             }
         }
 
-        return new ResolvedProfile(profile.Name, active);
+        return new ResolvedProfile(profile.Name, active, profile.StrictText);
+    }
+
+    /// <summary>
+    /// Severity overrides naming a code the rule's plugin never declares: a misspelt code would otherwise be
+    /// accepted and silently never apply. A plugin that declares no codes the SDK's way cannot be checked.
+    /// </summary>
+    private static IEnumerable<string> UnknownCodes(RuleDescriptor rule, RuleSettings settings)
+    {
+        if (rule.FindingCodes.Count == 0) yield break;
+        foreach (var code in settings.Severities.Keys.Order(StringComparer.Ordinal))
+        {
+            if (!rule.FindingCodes.Contains(code, StringComparer.Ordinal))
+            {
+                yield return $"severity override for unknown finding code '{code}'; the rule's codes: {string.Join(", ", rule.FindingCodes)}";
+            }
+        }
     }
 
     /// <summary>

@@ -41,6 +41,14 @@ public interface IRuleExecutor
 
     /// <summary>Why the rule is currently held back (its plugin is quarantined), or null when it can run.</summary>
     string? HeldBackReason(RuleDescriptor rule);
+
+    /// <summary>
+    /// A rule of this executor's went past the report limits (<see cref="ReportLimits"/>); an executor counts it
+    /// toward quarantining the plugin, as it counts a crash. Does nothing by default.
+    /// </summary>
+    void ReportOverLimit(RuleDescriptor rule, string reason)
+    {
+    }
 }
 
 /// <summary>What an executor reports for one run; findings carry the rule's own severities.</summary>

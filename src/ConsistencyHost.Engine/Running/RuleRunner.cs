@@ -24,8 +24,10 @@ namespace ConsistencyHost.Engine.Running;
 /// So that a runaway rule cannot eat the thread pool, a rule whose previous run is still going is skipped
 /// until that run ends. Untrusted plugins belong in a worker process, where an overrun kills the process.
 /// </remarks>
-public sealed class RuleRunner(IRuleExecutor? isolated = null)
+public sealed class RuleRunner(IRuleExecutor? isolated = null, ReportLimits? limits = null)
 {
+    private readonly ReportLimits _limits = limits ?? ReportLimits.Default;
+
     /// <summary>How long an in-process rule may wait for a pool thread before the request gives up on it.</summary>
     private static readonly TimeSpan StartAllowance = TimeSpan.FromSeconds(10);
 
@@ -43,7 +45,9 @@ public sealed class RuleRunner(IRuleExecutor? isolated = null)
         var runs = new List<RuleRunRecord>(started.Count);
         foreach (var (rule, run) in started)
         {
-            var (record, produced) = run.IsInline ? RunInline(rule, entry, cancellationToken) : Await(rule, run);
+            var (ran, all) = run.IsInline ? RunInline(rule, entry, cancellationToken) : Await(rule, run);
+            var (record, produced, cut) = _limits.Apply(ran, all, started.Count);
+            if (cut is not null && RunsIsolated(rule)) isolated!.ReportOverLimit(rule.Descriptor, cut);
             runs.Add(record);
             EngineTelemetry.RuleEnded(record);
             findings.AddRange(produced);
@@ -54,6 +58,11 @@ public sealed class RuleRunner(IRuleExecutor? isolated = null)
 
     private StartedRun Start(ActiveRule rule, IEntryView entry, EntrySubmission submission, CancellationToken cancellationToken)
     {
+        if (RuleApplicability.SkipReason(rule.Descriptor, entry) is { } nothingToCheck)
+        {
+            return StartedRun.Skipped(nothingToCheck);
+        }
+
         if (RunsIsolated(rule))
         {
             var started = Stopwatch.StartNew();
@@ -103,7 +112,7 @@ public sealed class RuleRunner(IRuleExecutor? isolated = null)
     }
 
     /// <summary>Runs a trusted rule on the calling thread; an overrun is found when it returns.</summary>
-    private static (RuleRunRecord Record, IEnumerable<ReportedFinding> Findings) RunInline(ActiveRule rule, IEntryView entry, CancellationToken cancellationToken)
+    private static (RuleRunRecord Record, IReadOnlyList<ReportedFinding> Findings) RunInline(ActiveRule rule, IEntryView entry, CancellationToken cancellationToken)
     {
         var (id, version) = (rule.Descriptor.Id, rule.Descriptor.Version);
         var clock = Stopwatch.StartNew();
@@ -143,7 +152,7 @@ public sealed class RuleRunner(IRuleExecutor? isolated = null)
         return list;
     }
 
-    private (RuleRunRecord Record, IEnumerable<ReportedFinding> Findings) Await(ActiveRule rule, StartedRun run)
+    private (RuleRunRecord Record, IReadOnlyList<ReportedFinding> Findings) Await(ActiveRule rule, StartedRun run)
     {
         var id = rule.Descriptor.Id;
         var version = rule.Descriptor.Version;
@@ -187,7 +196,7 @@ public sealed class RuleRunner(IRuleExecutor? isolated = null)
         return (new RuleRunRecord(id, version, RuleRunStatus.Ok, elapsed, "", findings.Count), findings);
     }
 
-    private (RuleRunRecord Record, IEnumerable<ReportedFinding> Findings) AwaitIsolated(ActiveRule rule, Task<ExecutorResult> task, Stopwatch clock)
+    private (RuleRunRecord Record, IReadOnlyList<ReportedFinding> Findings) AwaitIsolated(ActiveRule rule, Task<ExecutorResult> task, Stopwatch clock)
     {
         var (id, version) = (rule.Descriptor.Id, rule.Descriptor.Version);
         // The executor enforces the deadline itself (by killing its worker); this wait only guards against

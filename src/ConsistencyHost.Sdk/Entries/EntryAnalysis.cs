@@ -1,6 +1,7 @@
 using System.Collections.Concurrent;
 using ConsistencyHost.Spectra.Analysis.Interpretation;
 using ConsistencyHost.Spectra.Analysis.Prediction;
+using ConsistencyHost.Spectra.Analysis.Prediction.Coupling;
 using ConsistencyHost.Spectra.Model;
 
 namespace ConsistencyHost.Sdk.Entries;
@@ -14,6 +15,7 @@ public sealed class EntryAnalysis
 {
     private readonly Lazy<ProtonInterpretation?>[] _protons;
     private readonly ConcurrentDictionary<string, Lazy<ClassShifts>> _shiftsBySolvent = new(StringComparer.Ordinal);
+    private readonly Lazy<IReadOnlyList<CouplingTree>?> _couplings;
 
     /// <summary>Prepares lazy analyses for <paramref name="spectra"/> against <paramref name="perception"/>.</summary>
     public EntryAnalysis(IReadOnlyList<Spectrum> spectra, StructurePerception? perception)
@@ -22,6 +24,7 @@ public sealed class EntryAnalysis
         Spectra = spectra;
         Perception = perception;
         _protons = [.. spectra.Select(s => new Lazy<ProtonInterpretation?>(() => InterpretProtons(s, perception), LazyThreadSafetyMode.ExecutionAndPublication))];
+        _couplings = new Lazy<IReadOnlyList<CouplingTree>?>(() => BuildCouplings(perception), LazyThreadSafetyMode.ExecutionAndPublication);
     }
 
     internal IReadOnlyList<Spectrum> Spectra { get; }
@@ -51,6 +54,15 @@ public sealed class EntryAnalysis
         return _shiftsBySolvent.GetOrAdd(key, _ => new Lazy<ClassShifts>(
             () => ClassShifts.Of(perception.Prediction, perception.Equivalence, solvent), LazyThreadSafetyMode.ExecutionAndPublication)).Value;
     }
+
+    /// <summary>
+    /// The first-order coupling tree of every hydrogen class (in class order), built once per entry; null when
+    /// the entry has no structure.
+    /// </summary>
+    public IReadOnlyList<CouplingTree>? Couplings => _couplings.Value;
+
+    private static IReadOnlyList<CouplingTree>? BuildCouplings(StructurePerception? perception) =>
+        perception is null ? null : CouplingTreeBuilder.Build(perception.Prediction, perception.Equivalence);
 
     private static ProtonInterpretation? InterpretProtons(Spectrum spectrum, StructurePerception? perception) =>
         spectrum.Nucleus == Nucleus.H1 && perception is not null

@@ -21,7 +21,9 @@ public sealed class StructurePerception
         Molecule = molecule ?? throw new ArgumentNullException(nameof(molecule));
         _formula = new Lazy<MolecularFormula>(() => MolecularFormula.Of(molecule), LazyThreadSafetyMode.ExecutionAndPublication);
         _equivalence = new Lazy<NmrEquivalence>(() => NmrEquivalence.Of(molecule), LazyThreadSafetyMode.ExecutionAndPublication);
-        _prediction = new Lazy<PredictionContext>(() => PredictionContext.Of(molecule), LazyThreadSafetyMode.ExecutionAndPublication);
+        // Reuses the rings and aromaticity the equivalence perception already found, so a check perceives them once.
+        _prediction = new Lazy<PredictionContext>(
+            () => PredictionContext.Of(molecule, Equivalence.Rings, Equivalence.Aromaticity), LazyThreadSafetyMode.ExecutionAndPublication);
     }
 
     /// <summary>The molecule perceived.</summary>

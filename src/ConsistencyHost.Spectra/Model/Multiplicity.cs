@@ -42,10 +42,11 @@ public readonly record struct Multiplicity
     /// <summary>True for br, bs, br. and the French ls (large singulet).</summary>
     public bool IsBroad => (Flags & MultiplicityFlags.Broad) != 0;
 
-    /// <summary>True for app / apparent.</summary>
+    /// <summary>True for app / apparent and pseudo (pt, ps t, pseudo-t).</summary>
     public bool IsApparent => (Flags & MultiplicityFlags.Apparent) != 0;
 
-    /// <summary>True for m, multiplet, c (complex), overlapped.</summary>
+    /// <summary>True for m, multiplet, c (complex), overlapped, and partly resolved patterns (dm, tm, qm) whose
+    /// resolved splittings stay in <see cref="Components"/>.</summary>
     public bool IsMultiplet => (Flags & MultiplicityFlags.Multiplet) != 0;
 
     /// <summary>A first-order pattern whose J count can be checked: recognised, not m, not second order.</summary>
@@ -97,6 +98,6 @@ public enum MultiplicityFlags
     Broad = 4,
     /// <summary>Apparent (app, apparent).</summary>
     Apparent = 8,
-    /// <summary>Unresolved multiplet (m, c, complex, overlapped).</summary>
+    /// <summary>Unresolved multiplet (m, c, complex, overlapped), or a partly resolved one (dm, tm, qm).</summary>
     Multiplet = 16,
 }

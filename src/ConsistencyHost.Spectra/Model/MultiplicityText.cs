@@ -26,7 +26,31 @@ internal static class MultiplicityText
             else core.Add(word);
         }
         if (core.Count == 0) return Unrecognised(reported);
-        return ReadCore(reported, string.Join(' ', core), flags);
+        var spaced = string.Join(' ', core);
+        // "AB quartet" keeps its blank; "sept d", "sept of d", "d of d", "doublet of doublets" read as one word.
+        return IsSecondOrder(spaced) ? ReadCore(reported, spaced, flags) : ReadCore(reported, Joined(core), flags);
+    }
+
+    /// <summary>The core words without "of", plurals made singular ("doublets" → "doublet"), run together.</summary>
+    private static string Joined(List<string> core)
+    {
+        // "d of" or "of d" is a fragment, not a pattern.
+        if (Lower(core[0]) == "of" || Lower(core[^1]) == "of") return "";
+        var joined = "";
+        foreach (var word in core)
+        {
+            var lower = Lower(word);
+            if (lower == "of") continue;
+            joined += lower.Length > 2 && lower[^1] == 's' && IsName(lower[..^1]) ? lower[..^1] : lower;
+        }
+        return joined;
+    }
+
+    private static bool IsName(string word)
+    {
+        foreach (var (name, _) in Names)
+            if (name == word) return true;
+        return false;
     }
 
     /// <summary>Fast path for one word (most multiplicities); a lone "app" is not a multiplicity.</summary>
@@ -38,10 +62,11 @@ internal static class MultiplicityText
         _ => Unrecognised(word),
     };
 
+    // Common practice: "ps t", "pseudo t" (pseudo-triplet) say what "app t" says: the n + 1 reading is apparent.
     private static MultiplicityFlags ModifierOf(string word) => Lower(word) switch
     {
         "br" or "br." or "b" or "broad" or "(br)" or "(br.)" or "(broad)" => MultiplicityFlags.Broad,
-        "app" or "app." or "apparent" or "(app)" => MultiplicityFlags.Apparent,
+        "app" or "app." or "apparent" or "(app)" or "ps" or "ps." or "pseudo" => MultiplicityFlags.Apparent,
         _ => MultiplicityFlags.None,
     };
 
@@ -60,10 +85,34 @@ internal static class MultiplicityText
             case "bm" or "brm":
                 return Make(reported, [], flags | MultiplicityFlags.Multiplet | MultiplicityFlags.Broad);
         }
-        if (lower.Length > 2 && lower[0] == 'b' && lower[1] != 'r' && Components(lower[1..]) is { } broad)
+        // "bd", "bt", "brd", "brt": broad with the blank left out (common practice).
+        if (lower.Length >= 2 && lower[0] == 'b' && lower[1] != 'r' && Components(lower[1..]) is { } broad)
             return Make(reported, broad, flags | MultiplicityFlags.Broad);
-        return Components(lower) is { } parts ? Make(reported, parts, flags) : Unrecognised(reported);
+        if (lower.Length >= 3 && lower.StartsWith("br", StringComparison.Ordinal) && Components(lower[2..]) is { } glued)
+            return Make(reported, glued, flags | MultiplicityFlags.Broad);
+        if (lower == "pt") return Make(reported, [3], flags | MultiplicityFlags.Apparent);
+        return Components(lower) is { } parts ? Make(reported, parts, flags) : ReadPseudoOrPartial(reported, lower, flags);
     }
+
+    /// <summary>
+    /// "pseudo-t", "ps-t" (pseudo-triplet: apparent t; "pt" is read before the splittings) and a partly resolved
+    /// pattern "dm", "tm", "qm", "ddm" (resolved splittings of an unresolved multiplet: no first-order J count).
+    /// </summary>
+    /// <remarks>Common practice in experimental sections; "pt" is read as pseudo-triplet because a quintet of
+    /// triplets is written "quintt" or "tquint" in practice, while "pt" abbreviates pseudo-triplet.</remarks>
+    private static Multiplicity ReadPseudoOrPartial(string reported, string lower, MultiplicityFlags flags)
+    {
+        foreach (var prefix in PseudoPrefixes)
+        {
+            if (lower.Length > prefix.Length && lower.StartsWith(prefix, StringComparison.Ordinal))
+                return ReadCore(reported, lower[prefix.Length..], flags | MultiplicityFlags.Apparent);
+        }
+        if (lower.Length > 1 && lower[^1] == 'm' && Components(lower[..^1]) is { } resolved)
+            return Make(reported, resolved, flags | MultiplicityFlags.Multiplet);
+        return Unrecognised(reported);
+    }
+
+    private static readonly string[] PseudoPrefixes = ["pseudo-", "pseudo", "ps-", "ps.", "app-"];
 
     /// <summary>The text in lower case, without allocating when it already is (the usual case).</summary>
     private static string Lower(string text)
@@ -85,7 +134,7 @@ internal static class MultiplicityText
         if (text.EndsWith('q')) text = text[..^1];
         if (text.Length < 2 || text[0] != 'A' || (text[1] != 'B' && text[1] != 'A' && text[1] != 'M')) return false;
         foreach (var c in text)
-            if (!(c is >= 'A' and <= 'X' || c is '\'' or '′' or '₂' or '₃' or '2' or '3')) return false;
+            if (!(c is >= 'A' and <= 'X' || c is '\'' or '′' or '’' or '₂' or '₃' or '2' or '3')) return false;
         return true;
     }
 
@@ -115,7 +164,7 @@ internal static class MultiplicityText
         var prefix = (m.IsBroad ? "br " : "") + (m.IsApparent ? "app " : "");
         if (m.SecondOrderLabel is { } label) return prefix + label;
         if (m.IsSinglet) return prefix + "s";
-        if (m.IsMultiplet) return prefix + "m";
+        if (m.IsMultiplet) return prefix + string.Concat(m.Components.Select(Letter)) + "m";
         return prefix + string.Concat(m.Components.Select(Letter));
     }
 

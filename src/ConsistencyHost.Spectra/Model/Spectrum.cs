@@ -21,6 +21,12 @@ public sealed record Spectrum
     /// <summary>Decoupled nucleus when stated ("1H" for 13C{1H}); null otherwise.</summary>
     public string? Decoupled { get; init; }
 
+    /// <summary>
+    /// Notes about the whole spectrum as written in its header or after its list ("rotamers 6:4", "major Z isomer",
+    /// "OH not observed"); empty when none.
+    /// </summary>
+    public IReadOnlyList<string> Notes { get; init; } = [];
+
     /// <summary>Character offset of the spectrum's header in the source text, when read from text.</summary>
     public int? SourceOffset { get; init; }
 }

@@ -4,7 +4,7 @@ namespace ConsistencyHost.Spectra.Reported;
 
 /// <summary>
 /// Reads coupling items: "J = 7.1 Hz", "J 8.2", "J = 8.0 and 2.0 Hz", "J1 = 8.0", "J(H,F) = 8.9 Hz", "JHF = 47",
-/// "2JHF = 47.5 Hz", "³J = 7", "J = 7.1 Hz (H-F)", and bare continuations "2.0 Hz" / "6.7".
+/// "2JHF = 47.5 Hz", "³J = 7", "J = 7.1 Hz (H-F)", "1JC–F = 245 Hz", "JC-F", "2JC,F", and bare continuations "2.0 Hz" / "6.7".
 /// </summary>
 internal static class CouplingReader
 {
@@ -68,16 +68,25 @@ internal static class CouplingReader
             c.Pos += 2;
             return pair;
         }
+        // "JC–F", "JC-F", "JC,F", "1JC−F" (common practice in 13C lists of fluorinated compounds).
+        if (IsNucleusLetter(c.Current) && IsPairSeparator(c.PeekAt(1)) && IsNucleusLetter(c.PeekAt(2)))
+        {
+            var pair = $"{c.Current}{c.PeekAt(2)}";
+            c.Pos += 3;
+            return pair;
+        }
         while (char.IsAsciiDigit(c.Current) || c.Current is >= '₀' and <= '₉' or 'A' or 'B' or 'a' or 'b' or 'X') c.Pos++;
         return null;
     }
 
     private static bool IsNucleusLetter(char ch) => ch is 'H' or 'F' or 'P' or 'C' or 'D';
 
+    private static bool IsPairSeparator(char ch) => ch is ',' or '-' or '–' or '−' or '‒';
+
     /// <summary>"H,F", "H-F", "HF", "H, F" → "HF"; null when not a pair of nucleus letters.</summary>
     private static string? ReadPair(string inner)
     {
-        var letters = inner.Where(ch => ch is not (',' or '-' or ' ' or '–')).ToArray();
+        var letters = inner.Where(ch => ch != ' ' && !IsPairSeparator(ch)).ToArray();
         return letters.Length == 2 && IsNucleusLetter(letters[0]) && IsNucleusLetter(letters[1])
             ? new string(letters) : null;
     }
@@ -86,7 +95,8 @@ internal static class CouplingReader
         ProblemSink sink, List<Coupling> into, string? pair, int? bonds)
     {
         c.SkipSpaces();
-        if (c.Current is '=' or ':' or '≈' or '~') c.Pos++;
+        // '¼' is '=' as the text layer of many journal PDFs renders it ("J¼8.3 Hz", corpus rows si-003, si-058).
+        if (c.Current is '=' or ':' or '≈' or '~' or '¼') c.Pos++;
         // Most items hold one or two values: a stack buffer, and a list only past eight.
         Span<double> buffer = stackalloc double[8];
         List<double>? more = null;
@@ -104,7 +114,16 @@ internal static class CouplingReader
             else (more ??= []).Add(value);
             count++;
             c.SkipSpaces();
-            if (!(c.TryWord("and") || c.TryChar('&') || c.TryChar('/'))) break;
+            if (c.TryWord("and") || c.TryChar('&') || c.TryChar('/')) continue;
+            // "J = 8.0 Hz and 1.2 Hz": the unit written after each value.
+            var beforeUnit = c.Pos;
+            if (c.TryWord("Hz"))
+            {
+                c.SkipSpaces();
+                if (c.TryWord("and") || c.TryChar('&')) continue;
+            }
+            c.Pos = beforeUnit;
+            break;
         }
         c.SkipSpaces();
         if (c.TryWord("Hz")) c.SkipSpaces();

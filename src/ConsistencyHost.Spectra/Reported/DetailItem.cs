@@ -16,11 +16,18 @@ internal readonly record struct DetailItem(int Offset, string Text)
             else if (ch == ')') depth--;
             if (i < end && (depth > 0 || (ch != ',' && ch != ';'))) continue;
             if (i < end && decimalComma && ch == ',' && IsDigitAt(text, i - 1) && IsDigitAt(text, i + 1)) continue;
+            if (i < end && ch == ',' && IsTypedCouplingComma(text, i)) continue;
             items.Add(Trimmed(text, itemStart, i));
             itemStart = i + 1;
         }
         return items;
     }
+
+    /// <summary>The comma of "2JC,F = 21.0 Hz": J, a nucleus letter, the comma, a nucleus letter.</summary>
+    private static bool IsTypedCouplingComma(string text, int i) =>
+        i >= 2 && i + 1 < text.Length && text[i - 2] == 'J' && IsNucleusLetter(text[i - 1]) && IsNucleusLetter(text[i + 1]);
+
+    private static bool IsNucleusLetter(char ch) => ch is 'H' or 'F' or 'P' or 'C';
 
     private static bool IsDigitAt(string text, int i) => i >= 0 && i < text.Length && char.IsAsciiDigit(text[i]);
 

@@ -4,7 +4,8 @@ namespace ConsistencyHost.Spectra.Reported;
 
 /// <summary>
 /// Interprets the items of a signal's details in any order: "(dd, J = 8.0, 2.0 Hz, 1H, H-3)", "(2H, m, CH2)",
-/// "(1H, d, J 8.2 Hz, ArH)", "(d, 9.6 Hz, 1 H)", "(3H, d, 6.7)", "(2C)", "(d, J = 245.3 Hz)", "(br s, 1H, exchangeable with D2O)".
+/// "(1H, d, J 8.2 Hz, ArH)", "(d, 9.6 Hz, 1 H)", "(3H, d, 6.7)", "(2C)", "(d, J = 245.3 Hz)", "(br s, 1H, exchangeable with D2O)",
+/// "(2 × dd, J = 8.0, 2.0 Hz, 1H)", and in 13C lists the DEPT/APT labels "(CH)", "(2×CH)".
 /// </summary>
 internal static class DetailsReader
 {
@@ -30,7 +31,15 @@ internal static class DetailsReader
             return true;
         }
         if (TryCount(item, draft, sink)) return false;
+        if (TryRepeatedMultiplicity(item, draft, decimalComma, sink)) return true;
         if (StartsWithNumber(text) && !Assignments.IsAssignment(text)) return ReadBareCoupling(item, draft, decimalComma, sink, afterCoupling);
+        // Before the multiplicities: in a 13C list "(C)" is a DEPT label, not "c" (complex).
+        if (draft.Nucleus == Nucleus.C13 && DeptLabels.TryRead(text, out var carbons))
+        {
+            if (carbons > 1) SetCarbonCount(item, draft, carbons, sink);
+            draft.Assignments.Add(text);
+            return false;
+        }
         if (TryMultiplicity(item, draft, decimalComma, sink)) return true;
         if (SignalNotes.IsNote(text))
         {
@@ -78,6 +87,30 @@ internal static class DetailsReader
         else if (decimals > 0) return false;
         else if (letter == 'C') draft.CarbonCount = (int)value;
         else draft.NucleusCount = (int)value;
+        return true;
+    }
+
+    /// <summary>"(2C, 2×CH)" agrees with itself; a second, different count is a problem.</summary>
+    private static void SetCarbonCount(DetailItem item, SignalDraft draft, int carbons, ProblemSink sink)
+    {
+        if (draft.CarbonCount is null && !draft.HasCount) draft.CarbonCount = carbons;
+        else if (draft.CarbonCount != carbons) sink.Add(item.Offset, Clip(item.Text), ReportedTextMessages.ExpectedOneCount);
+    }
+
+    /// <summary>
+    /// "2 × dd": the pattern seen twice (common practice). In 1H lists, once per rotamer or for two overlapping
+    /// signals: read as dd with the item kept as a note. In 13C lists ("129.3 (2 × d)", off-resonance or C–F
+    /// patterns), two carbons with that pattern.
+    /// </summary>
+    private static bool TryRepeatedMultiplicity(DetailItem item, SignalDraft draft, bool decimalComma, ProblemSink sink)
+    {
+        if (!Multiplier.TrySplitLeading(item.Text, out var times, out var single) || !Model.Multiplicity.TryParse(single, out var pattern) || times < 2)
+            return false;
+        // "(dd, …, 2 × dd)" as the formatter writes the note back: the pattern is already there.
+        if (draft.Multiplicity is null || !Model.Multiplicity.Parse(draft.Multiplicity).Equals(pattern))
+            TryMultiplicity(new DetailItem(item.Offset + item.Text.Length - single.Length, single), draft, decimalComma, sink);
+        if (draft.Nucleus == Nucleus.C13) SetCarbonCount(item, draft, times, sink);
+        else draft.Notes.Add(item.Text);
         return true;
     }
 

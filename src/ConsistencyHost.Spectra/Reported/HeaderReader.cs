@@ -8,10 +8,12 @@ internal sealed record SpectrumHeader(int Offset, Nucleus Nucleus, string? Decou
     public double? FrequencyMHz { get; set; }
     public string? Solvent { get; set; }
     public double? TemperatureK { get; set; }
+    public List<string> Notes { get; } = [];
 }
 
 /// <summary>
-/// Reads "1H NMR (400 MHz, CDCl3) δ", "13C{1H} NMR", "1H-NMR (CDCl3) δ:", "δH (400 MHz; CDCl3; Me4Si)".
+/// Reads "1H NMR (400 MHz, CDCl3) δ", "13C{1H} NMR", "1H-NMR (CDCl3) δ:", "δH (400 MHz; CDCl3; Me4Si)",
+/// "dH (CDCl3, 300 MHz)", "1H NMR (400 MHz, CDCl3, rotamers 6:4)".
 /// </summary>
 internal static class HeaderReader
 {
@@ -42,11 +44,14 @@ internal static class HeaderReader
         return ok;
     }
 
-    /// <summary>"δH", "δC", "δF", "δP" followed by a blank, '(' or ':'.</summary>
+    /// <summary>"δH", "δC", "δF", "δP" followed by a blank, '(' or ':'; also "dH", "dC" where a PDF text layer lost the δ.</summary>
+    /// <remarks>"dH (CDCl3, 300 MHz)" is how the RSC-style δH header reads after copying from many PDFs (published
+    /// corpus rows si-001, si-039); a lone lower-case d before H/C/F/P and a blank is no other reading.</remarks>
     private static bool TryDeltaForm(TextCursor c, out Nucleus nucleus)
     {
         nucleus = Nucleus.Unknown;
-        if (c.Current != 'δ') return false;
+        if (c.Current is not ('δ' or 'd')) return false;
+        if (c.Current == 'd' && c.PeekAt(1) is not ('H' or 'C' or 'F' or 'P')) return false;
         nucleus = NucleusNames.Parse(c.PeekAt(1).ToString());
         var next = c.PeekAt(2);
         if (nucleus == Nucleus.Unknown || !(TextCursor.IsSpace(next) || next is '(' or ':')) return false;

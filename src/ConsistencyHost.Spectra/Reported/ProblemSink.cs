@@ -6,6 +6,10 @@ internal sealed class ProblemSink(ReadMode mode)
     private readonly List<ReportedTextProblem> problems = [];
 
     public IReadOnlyList<ReportedTextProblem> Problems => problems;
+    public ReadMode Mode => mode;
+
+    /// <summary>Prose skipped on purpose in lenient mode.</summary>
+    public List<SkippedText> Skipped { get; } = [];
     public int Count => problems.Count;
 
     public void Add(int offset, string fragment, string expected) =>

@@ -41,6 +41,8 @@ public static class ReportedTextFormatter
         if (s.FrequencyMHz is { } f) items.Add(N(f) + " MHz");
         if (s.Solvent is { } solvent) items.Add(solvent);
         if (s.TemperatureK is { } t) items.Add(N(t) + " K");
+        // Spectrum notes ("rotamers 6:4", "OH not observed") read back as header notes.
+        items.AddRange(s.Notes);
         if (items.Count > 0) text.Append(" (").AppendJoin(", ", items).Append(')');
         text.Append(" δ ");
     }

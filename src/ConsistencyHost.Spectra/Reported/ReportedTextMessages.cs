@@ -21,10 +21,11 @@ public static class ReportedTextMessages
     public const string ExpectedCouplingContext = "a multiplicity or 'J =' before a bare coupling value";
     public const string ExpectedUnambiguousDecimal =
         "a decimal point (7.26), or decimal commas used from the first shift of the list on (7,26 ; 7,20)";
-    public const string ExpectedHrmsCalculated = "'calcd for <ion formula> <m/z>'";
+    public const string ExpectedHrmsCalculated = "'calcd for <ion formula> <m/z>' or 'found <m/z>, <ion formula> requires <m/z>'";
     public const string ExpectedHrmsFormula = "the ion formula after 'calcd for' (such as C10H14NO2)";
     public const string ExpectedHrmsMz = "an m/z value such as 180.1019";
     public const string ExpectedHrmsFound = "'found <m/z>' or the end of the HRMS line";
+    public const string ExpectedHrmsRequires = "'requires <m/z>' after the ion formula (as in 'found 182.0810, C9H12NO2 requires 182.0812')";
     public const string ExpectedShorterText = "a text within the length limit";
     public const string ExpectedFewerSignals = "no more signals than the per-spectrum limit";
 

@@ -40,6 +40,7 @@ public static class ReportedTextReader
             Spectra = failed ? [] : spectra,
             Hrms = failed ? [] : hrms,
             Problems = clean ? [] : [.. sink.Problems.OrderBy(p => p.Offset)],
+            Skipped = sink.Skipped,
         };
     }
 
@@ -59,6 +60,8 @@ public static class ReportedTextReader
                 var before = sink.Count;
                 spectra.Add(SignalListReader.Read(c, HeaderReader.Read(c, sink), sink, options, before));
             }
+            else if (spectra.Count > 0 && ListNotes.TryReadClause(c) is { } note)
+                spectra[^1] = spectra[^1] with { Notes = [.. spectra[^1].Notes, note] };
             else
                 SkipUnknown(c, sink);
         }
@@ -75,6 +78,18 @@ public static class ReportedTextReader
         var start = c.Pos;
         c.Pos++;
         while (!c.AtEnd && !(HeaderReader.IsAt(c) || HrmsReader.IsAt(c))) c.Pos++;
-        sink.Add(start, c.Fragment(start, c.Pos), ReportedTextMessages.ExpectedHeader);
+        if (sink.Mode == ReadMode.Strict || ProseClauses.KindAt(c.Text, start) is null)
+        {
+            sink.Add(start, c.Fragment(start, c.Pos), ReportedTextMessages.ExpectedHeader);
+            return;
+        }
+
+        // Lenient, and the text opens with prose such as "Rf 0.32 (…); mp 120 °C": each known clause is skipped
+        // with a note, any other clause is still a problem.
+        ProseClauses.Split(c.Text, start, c.Pos, (from, to) =>
+        {
+            if (ProseClauses.KindAt(c.Text, from) is { } kind) sink.Skipped.Add(new(from, kind, c.Fragment(from, to)));
+            else sink.Add(from, c.Fragment(from, to), ReportedTextMessages.ExpectedHeader);
+        });
     }
 }

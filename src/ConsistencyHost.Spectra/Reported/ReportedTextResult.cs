@@ -11,6 +11,9 @@ public sealed record ReportedTextResult
     /// <summary>The HRMS claims in the order written (empty in strict mode when there was an error).</summary>
     public IReadOnlyList<HrmsClaim> Hrms { get; init; } = [];
 
+    /// <summary>Non-NMR prose (Rf, mp, IR, yield …) skipped on purpose in lenient mode, in text order.</summary>
+    public IReadOnlyList<SkippedText> Skipped { get; init; } = [];
+
     /// <summary>Every problem, in text order.</summary>
     public IReadOnlyList<ReportedTextProblem> Problems { get; init; } = [];
 

@@ -10,11 +10,19 @@ internal static class SignalListReader
     {
         var decimalComma = UsesDecimalComma(c);
         var signals = new List<Signal>();
+        var notes = header.Notes;
         while (true)
         {
             c.SkipSpaces();
             if (c.AtEnd || HeaderReader.IsAt(c) || HrmsReader.IsAt(c)) break;
             if (c.TryWord("ppm")) continue;
+            // "…, 7.33 (s, 3H), and 7.35 (s, 2H)": "and" before the last signal (common practice).
+            if (signals.Count > 0 && c.Current == 'a' && c.TryWord("and")) continue;
+            if (!TextCursor.IsDigit(c.Current) && ReadNote(c, signals, notes) is { } over)
+            {
+                if (over) break;
+                continue;
+            }
             if (signals.Count >= options.MaxSignalsPerSpectrum)
             {
                 sink.AddLimit(c.Pos, c.Fragment(c.Pos), ReportedTextMessages.ExpectedFewerSignals,
@@ -41,7 +49,36 @@ internal static class SignalListReader
             Decoupled = header.Decoupled,
             SourceOffset = header.Offset,
             Signals = signals,
+            Notes = notes.Count == 0 ? [] : notes,
         };
+    }
+
+    /// <summary>
+    /// A note where a signal was due: a bracketed one belongs to the signal before it, a clause to the spectrum.
+    /// Null when there is no note; otherwise true when the list is over.
+    /// </summary>
+    private static bool? ReadNote(TextCursor c, List<Signal> signals, List<string> notes)
+    {
+        if (signals.Count > 0 && ListNotes.TryReadBracketed(c) is { } bracketed)
+        {
+            signals[^1] = signals[^1] with { Notes = [.. signals[^1].Notes, bracketed] };
+            return EndsAfterNote(c);
+        }
+        if (ListNotes.TryReadClause(c) is not { } clause) return null;
+        notes.Add(clause);
+        return EndsAfterNote(c);
+    }
+
+    private static bool EndsAfterNote(TextCursor c)
+    {
+        c.SkipSpaces();
+        if (c.Current is ',' or ';')
+        {
+            c.Pos++;
+            return false;
+        }
+        if (c.Current == '.') c.Pos++;
+        return true;
     }
 
     private static Signal? ReadOne(TextCursor c, Nucleus nucleus, bool decimalComma, ProblemSink sink)
@@ -50,6 +87,10 @@ internal static class SignalListReader
         if (draft is null) return null;
         c.SkipSpacesOnLine();
         InlineDetails.TryRead(c, draft, decimalComma, sink);
+        var afterDetails = c.Pos;
+        c.SkipSpaces();
+        if (ListNotes.TryReadBracketed(c) is { } note) draft.Notes.Add(note);
+        else c.Pos = afterDetails;
         return draft.Build();
     }
 
@@ -63,6 +104,7 @@ internal static class SignalListReader
             c.Pos++;
             return false;
         }
+        if (c.Current == 'a' && c.TryWord("and")) return false;
         if (c.Current == '.' && ListEnd.IsTerminator(c.Text, c.Pos))
         {
             c.Pos++;

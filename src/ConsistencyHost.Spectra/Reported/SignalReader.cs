@@ -2,7 +2,8 @@ using ConsistencyHost.Spectra.Model;
 
 namespace ConsistencyHost.Spectra.Reported;
 
-/// <summary>Reads one signal: a shift or range, optional "ppm" and "*", optional parenthesised details.</summary>
+/// <summary>Reads one signal: a shift, a range or a rotamer pair ("4.33/4.22"), optional "ppm" and "*", optional
+/// parenthesised details.</summary>
 internal static class SignalReader
 {
     public static SignalDraft? Read(TextCursor c, Nucleus nucleus, bool decimalComma, ProblemSink sink)
@@ -35,6 +36,7 @@ internal static class SignalReader
             sink.Add(draft.Offset, c.Fragment(draft.Offset), ReportedTextMessages.ExpectedUnambiguousDecimal);
             return false;
         }
+        if (c.Current == '/' && TextCursor.IsDigit(c.PeekAt(1))) return ReadRotamerPair(c, draft, first, decimalComma);
         var beforeDash = c.Pos;
         c.SkipSpaces();
         if (!TextCursor.IsDash(c.Current))
@@ -52,6 +54,19 @@ internal static class SignalReader
         }
         draft.Low = Math.Min(first, second);
         draft.High = Math.Max(first, second);
+        return true;
+    }
+
+    /// <summary>
+    /// "4.33/4.22 (s, 2H)": one environment at two shifts, one per rotamer (common practice). Read as one signal at
+    /// the first shift written, with both kept in a note; never as a range (a range has a width to check).
+    /// </summary>
+    private static bool ReadRotamerPair(TextCursor c, SignalDraft draft, double first, bool decimalComma)
+    {
+        c.Pos++;
+        c.TryNumber(decimalComma, out _, out _);
+        draft.Shift = first;
+        draft.Notes.Add("rotamers " + c.Text[draft.Offset..c.Pos]);
         return true;
     }
 

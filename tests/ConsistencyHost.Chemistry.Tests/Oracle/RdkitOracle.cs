@@ -17,6 +17,10 @@ internal static class RdkitOracle
     /// <summary>Output lines of rdkit_topicity.py (probe substitution) for a .smi file.</summary>
     public static (string Text, string? Error) Topicity(string smiPath) => ExecuteScript("rdkit_topicity.py", smiPath);
 
+    /// <summary>Output lines of rdkit_variants.py: each molecule written in RDKit's order, a random order and Kekulé form.</summary>
+    public static (string Text, string? Error) Variants(string smiPath, int count) =>
+        ExecuteScript("rdkit_variants.py", smiPath, count.ToString(System.Globalization.CultureInfo.InvariantCulture));
+
     /// <summary>Committed stereo cases (the NCI set carries no configurations).</summary>
     public static string StereoCases => Path.Combine(AppContext.BaseDirectory, "Oracle", "stereo_cases.smi");
 

@@ -14,6 +14,11 @@ public sealed class SmilesReaderErrorTests
         { "CC)C", SmilesMessages.UnmatchedCloseBranch, 2 },
         { "()C", SmilesMessages.BranchWithoutAtom, 0 },
         { "C()C", SmilesMessages.EmptyBranch, 1 },
+        // Branch grammar of the OpenSMILES specification (a branch holds a chain; a bond precedes its atom, from
+        // memory of section 3.5); RDKit (python3-rdkit) refuses all three as well.
+        { "C((C))C", SmilesMessages.BranchOpensBranch, 2 },
+        { "C(((((C)))))", SmilesMessages.BranchOpensBranch, 2 },
+        { "C=(C)C", SmilesMessages.Format(SmilesMessages.BondBeforeBranch, "="), 1 },
         { "C[Xx]", SmilesMessages.Format(SmilesMessages.UnknownElement, "Xx"), 2 },
         { "CQ", SmilesMessages.Format(SmilesMessages.UnknownElement, "Q"), 1 },
         { "C[CH4", SmilesMessages.UnclosedBracket, 1 },

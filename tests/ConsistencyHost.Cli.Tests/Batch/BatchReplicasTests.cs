@@ -37,6 +37,29 @@ public sealed class BatchReplicasTests : IDisposable
     }
 
     [Fact]
+    public async Task Batch_OneServerWithUnreadableFiles_ReportsInInputOrderLikeTheEmbeddedEngine()
+    {
+        var folder = Directory.CreateDirectory(Path.Combine(_work, "mixed")).FullName;
+        foreach (var file in Directory.GetFiles(Path.Combine(RepoPaths.Samples, "entries"), "*.json"))
+        {
+            File.Copy(file, Path.Combine(folder, Path.GetFileName(file)));
+        }
+
+        // Unreadable files sorted among the readable ones: first, in the middle and last.
+        File.WriteAllText(Path.Combine(folder, "AIS-LQ-0000-broken.json"), "{ not json");
+        File.WriteAllText(Path.Combine(folder, "AIS-LQ-0430-broken.json"), "{\"entryId\": \"AIS-LQ-0430\", \"structur\": {}}");
+        File.WriteAllText(Path.Combine(folder, "AIS-LQ-9999-broken.json"), "[]");
+        using var host = await ServeProcess.StartAsync();
+
+        await CliProcess.RunAsync("batch", folder, "--out", Path.Combine(_work, "remote"), "--server", host.Grpc.ToString());
+        await CliProcess.RunAsync("batch", folder, "--out", Path.Combine(_work, "local"));
+
+        var local = EntryIds(Path.Combine(_work, "local"));
+        Assert.Equal(Directory.GetFiles(folder, "*.json").Length, local.Count);
+        Assert.Equal(local, EntryIds(Path.Combine(_work, "remote")));
+    }
+
+    [Fact]
     public async Task Batch_RepeatedServerAddress_IsAUsageError()
     {
         var entries = Path.Combine(RepoPaths.Samples, "entries");
@@ -61,6 +84,9 @@ public sealed class BatchReplicasTests : IDisposable
         Assert.Equal(2, exit);
         Assert.Contains("entry id 'AIS-LQ-0436' appears twice in the input (entries 1 and 2)", stderr);
     }
+
+    private static List<string> EntryIds(string folder) =>
+        [.. File.ReadLines(Path.Combine(folder, "reports.jsonl")).Select(line => JsonDocument.Parse(line).RootElement.GetProperty("entryId").GetString()!)];
 
     // Reports arrive in completion order over several hosts; keyed by entry id (a repeated id would throw here),
     // with rule timings blanked since they differ between runs.

@@ -9,7 +9,7 @@ internal static class HeadlessChromium
 
     public static async Task<(string Log, string Dom)> ScreenshotAsync(string htmlFile, string png)
     {
-        Assert.True(File.Exists(Executable), $"{Executable} is missing: install Debian's chromium (see .ci/run)");
+        Assert.True(File.Exists(Executable), $"{Executable} is missing: install Debian's chromium (tests/setup/debian-packages.sh)");
         var profile = Directory.CreateTempSubdirectory("ch-chromium-").FullName;
         try
         {

@@ -50,6 +50,33 @@ public sealed class ProfileResolverTests
     }
 
     [Fact]
+    public void Construct_SeverityOverrideForMisspeltCode_IsRefusedWithTheRulesCodes()
+    {
+        using var folder = PluginFolder.With("ConsistencyHost.Rules.SpectrumMetadata");
+        var options = new EngineOptions
+        {
+            PluginsPath = folder.Path,
+            Profiles =
+            [
+                new Profile
+                {
+                    Name = "publication",
+                    Rules = new Dictionary<string, RuleSettings>
+                    {
+                        ["spectrum-metadata"] = new() { Severities = new Dictionary<string, Severity> { ["solvent-not-sated"] = Severity.Error, ["solvent-not-stated"] = Severity.Error } },
+                    },
+                },
+            ],
+        };
+
+        var error = Assert.Throws<ProfileConfigurationException>(() => new CheckEngine(options));
+
+        var problem = Assert.Single(error.Problems);
+        Assert.StartsWith("profile 'publication', rule 'spectrum-metadata': severity override for unknown finding code 'solvent-not-sated'", problem, StringComparison.Ordinal);
+        Assert.Contains("solvent-not-stated", problem, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Check_SeverityOverrideInProfile_ChangesFindingSeverity()
     {
         using var folder = PluginFolder.With("ConsistencyHost.Rules.SpectrumMetadata");

@@ -73,6 +73,85 @@ public sealed class JsonHttpTests
     }
 
     [Fact]
+    public async Task CheckEntry_MisspelledTopLevelField_IsHttp400NamingIt()
+    {
+        await using var host = await RunningHost.StartAsync(AllRules);
+        using var http = NewClient(host);
+        var json = JsonFormatter.Default.Format(Requests.Complete()).Replace("\"structure\"", "\"structur\"", StringComparison.Ordinal);
+
+        using var reply = await http.PostAsync("/v1/entries:check", Json(json));
+
+        Assert.Equal(HttpStatusCode.BadRequest, reply.StatusCode);
+        using var body = JsonDocument.Parse(await reply.Content.ReadAsStringAsync());
+        Assert.Equal(3, body.RootElement.GetProperty("code").GetInt32());
+        Assert.StartsWith("structur: unknown field; expected one of ", body.RootElement.GetProperty("message").GetString(), StringComparison.Ordinal);
+        // google.rpc.BadRequest (googleapis/googleapis google/rpc/error_details.proto) carries each field path.
+        var detail = Assert.Single(body.RootElement.GetProperty("details").EnumerateArray());
+        Assert.Equal("type.googleapis.com/google.rpc.BadRequest", detail.GetProperty("@type").GetString());
+        var violation = Assert.Single(detail.GetProperty("fieldViolations").EnumerateArray());
+        Assert.Equal("structur", violation.GetProperty("field").GetString());
+    }
+
+    [Fact]
+    public async Task CheckEntry_MisspelledNestedField_NamesItsPath()
+    {
+        await using var host = await RunningHost.StartAsync(AllRules);
+        using var http = NewClient(host);
+        var json = JsonFormatter.Default.Format(Requests.Complete()).Replace("\"nucleus\"", "\"nucelus\"", StringComparison.Ordinal);
+
+        using var reply = await http.PostAsync("/v1/entries:check", Json(json));
+
+        Assert.Equal(HttpStatusCode.BadRequest, reply.StatusCode);
+        using var body = JsonDocument.Parse(await reply.Content.ReadAsStringAsync());
+        Assert.StartsWith("spectra[0].nucelus: unknown field", body.RootElement.GetProperty("message").GetString(), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task CheckEntry_ProtoFieldNames_AreAcceptedLikeJsonNames()
+    {
+        await using var host = await RunningHost.StartAsync(AllRules);
+        using var http = NewClient(host);
+        // The protobuf JSON mapping accepts the proto field name as well as its lowerCamel JSON name.
+        var json = new JsonFormatter(JsonFormatter.Settings.Default.WithPreserveProtoFieldNames(true)).Format(Requests.Complete());
+
+        using var reply = await http.PostAsync("/v1/entries:check", Json(json));
+
+        Assert.Equal(HttpStatusCode.OK, reply.StatusCode);
+    }
+
+    [Fact]
+    public async Task CheckEntry_InvalidJson_IsHttp400WithLineAndColumn()
+    {
+        await using var host = await RunningHost.StartAsync(AllRules);
+        using var http = NewClient(host);
+
+        using var reply = await http.PostAsync("/v1/entries:check", Json("{\n  \"entryId\": \"AIS-LQ-J002\",\n  \"structure\": }"));
+
+        Assert.Equal(HttpStatusCode.BadRequest, reply.StatusCode);
+        using var body = JsonDocument.Parse(await reply.Content.ReadAsStringAsync());
+        Assert.Equal(3, body.RootElement.GetProperty("code").GetInt32());
+        Assert.StartsWith("request body is not valid JSON at line 3, column ", body.RootElement.GetProperty("message").GetString(), StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task CheckEntry_ChunkedBodyOverLimit_IsRefusedWith413()
+    {
+        await using var host = await RunningHost.StartAsync(AllRules);
+        using var http = NewClient(host);
+        var request = Requests.Complete();
+        request.ReportedText.Add(new string('x', 4 * 1024 * 1024 + 1));
+        // A stream of unknown length is sent chunked (Transfer-Encoding: chunked, no Content-Length).
+        using var content = new StreamContent(new UnseekableStream(Encoding.UTF8.GetBytes(JsonFormatter.Default.Format(request))));
+        content.Headers.ContentType = new("application/json");
+
+        using var reply = await http.PostAsync("/v1/entries:check", content);
+
+        Assert.Equal(HttpStatusCode.RequestEntityTooLarge, reply.StatusCode);
+        using var body = JsonDocument.Parse(await reply.Content.ReadAsStringAsync());
+        Assert.Equal(8, body.RootElement.GetProperty("code").GetInt32());
+    }
+
+    [Fact]
     public async Task ListRules_Get_ListsLoadedRules()
     {
         await using var host = await RunningHost.StartAsync(AllRules);
@@ -118,5 +197,21 @@ public sealed class JsonHttpTests
         var copy = response.Clone();
         foreach (var run in copy.RuleRuns) run.ElapsedMs = 0;
         return copy;
+    }
+
+    /// <summary>A read-only stream that hides its length, so HttpClient sends it chunked.</summary>
+    private sealed class UnseekableStream(byte[] bytes) : Stream
+    {
+        private readonly MemoryStream _inner = new(bytes, writable: false);
+        public override bool CanRead => true;
+        public override bool CanSeek => false;
+        public override bool CanWrite => false;
+        public override long Length => throw new NotSupportedException();
+        public override long Position { get => throw new NotSupportedException(); set => throw new NotSupportedException(); }
+        public override int Read(byte[] buffer, int offset, int count) => _inner.Read(buffer, offset, count);
+        public override void Flush() { }
+        public override long Seek(long offset, SeekOrigin origin) => throw new NotSupportedException();
+        public override void SetLength(long value) => throw new NotSupportedException();
+        public override void Write(byte[] buffer, int offset, int count) => throw new NotSupportedException();
     }
 }

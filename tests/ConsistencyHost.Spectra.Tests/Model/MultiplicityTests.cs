@@ -30,6 +30,23 @@ public sealed class MultiplicityTests
     [InlineData("app t", "app t", "3", 1)]
     [InlineData("apparent q", "app q", "4", 1)]
     [InlineData("dquint", "dquint", "2,5", 2)]
+    // Common practice (issue 13): pseudo-triplets are apparent triplets, never a quintet of triplets.
+    [InlineData("pt", "app t", "3", 1)]
+    [InlineData("ps t", "app t", "3", 1)]
+    [InlineData("ps. t", "app t", "3", 1)]
+    [InlineData("pseudo-t", "app t", "3", 1)]
+    [InlineData("pseudo t", "app t", "3", 1)]
+    [InlineData("pseudo-triplet", "app t", "3", 1)]
+    // Common practice: splittings written with blanks or "of".
+    [InlineData("sept d", "septd", "7,2", 2)]
+    [InlineData("sept of d", "septd", "7,2", 2)]
+    [InlineData("d of d", "dd", "2,2", 2)]
+    [InlineData("doublet of doublets", "dd", "2,2", 2)]
+    [InlineData("triplet of doublets", "td", "3,2", 2)]
+    // Common practice: broad with the blank left out (published corpus rows si-027, si-095).
+    [InlineData("bd", "br d", "2", 1)]
+    [InlineData("brd", "br d", "2", 1)]
+    [InlineData("brt", "br t", "3", 1)]
     public void Parse_FirstOrderText_GivesComponentsAndJCount(string text, string canonical, string lines, int jCount)
     {
         var m = Multiplicity.Parse(text);
@@ -57,8 +74,27 @@ public sealed class MultiplicityTests
         Assert.Equal(label, m.SecondOrderLabel);
     }
 
+    // Common practice: a partly resolved pattern (doublet of multiplets …) keeps its resolved splittings but, like m,
+    // implies no first-order J count.
+    [Theory]
+    [InlineData("dm", "dm", "2", false)]
+    [InlineData("tm", "tm", "3", false)]
+    [InlineData("qm", "qm", "4", false)]
+    [InlineData("ddm", "ddm", "2,2", false)]
+    [InlineData("br dm", "br dm", "2", true)]
+    public void Parse_PartlyResolved_KeepsSplittingsWithoutJCount(string text, string canonical, string lines, bool broad)
+    {
+        var m = Multiplicity.Parse(text);
+        Assert.True(m.IsRecognised && m.IsMultiplet);
+        Assert.Equal((canonical, lines, broad), (m.Canonical, string.Join(',', m.Components), m.IsBroad));
+        Assert.Null(m.ExpectedCouplingCount());
+    }
+
     [Theory]
     [InlineData("dx")]
+    [InlineData("ps")]
+    [InlineData("pseudo-x")]
+    [InlineData("d of")]
     [InlineData("brd s")]
     [InlineData("")]
     [InlineData("singlett")]

@@ -30,7 +30,7 @@ public sealed class ReportedTextReaderBadInputTests
         { "1H NMR (400 MHz, CDCl3 δ 7.26 (s, 1H).", 7, "(400 MHz, CDCl3 δ 7.26 (s, 1H)", M.ExpectedHeaderClose },
         { "1H NMR (400 MHz, CDCl3) δ.", 25, ".", M.ExpectedShift },
         { "1H NMR (400 MHz, CDCl3) δ", 25, "", M.ExpectedSignals },
-        { "Yield 85%. " + H + "7.26 (s, 1H).", 0, "Yield 85%.", M.ExpectedHeader },
+        { "Product 5. " + H + "7.26 (s, 1H).", 0, "Product 5.", M.ExpectedHeader },
         { H + "7.26 (s, 1H), then something.", 40, "then something.", M.ExpectedShift },
         { H + "7.26 (s, , 1H).", 35, ",", M.ExpectedDetail },
         { H + "7.26 (s, 1H, xyz).", 39, "xyz", M.ExpectedDetail },
@@ -47,7 +47,25 @@ public sealed class ReportedTextReaderBadInputTests
         { "HRMS (ESI) m/z: [M + H]+ calcd for C10H14NO2; found 180.1016.", 44, "; found 180.1016.", M.ExpectedHrmsMz },
         { "HRMS (ESI) m/z: [M + H]+ calcd for C10H14NO2 180.1019; found n/a.", 61, "n/a.", M.ExpectedHrmsMz },
         { "HRMS (ESI) m/z: [M + H]+ calcd for C10H14NO2 180.1019; measured 180.1016.", 53, "; measured 180.1016.", M.ExpectedHrmsFound },
+        // Lenient spellings stop where the text is not one: an unknown note, an unknown bracket, "found" without "requires".
+        { H + "7.26 (s, 1H); OH missing.", 40, "OH missing.", M.ExpectedShift },
+        { H + "7.26 (s, 1H) [see text].", 39, "[see text].", M.ExpectedSeparator },
+        { H + "7.26 (ps x, 1H).", 32, "ps x", M.ExpectedDetail },
+        { "HRMS (ESI) m/z: found 182.0810, C9H12NO2 182.0812.", 41, "182.0812.", M.ExpectedHrmsRequires },
     };
+
+    // Common practice: yield, mp and Rf prose before the NMR data. Strict refuses it; lenient skips it with a note.
+    [Fact]
+    public void Read_YieldProseBeforeHeader_StrictRefusesAndLenientSkips()
+    {
+        const string text = "Yield 85%. " + H + "7.26 (s, 1H).";
+        var strict = Assert.Single(ReportedTextReader.Read(text).Problems);
+        Assert.Equal((0, "Yield 85%.", M.ExpectedHeader), (strict.Offset, strict.Fragment, strict.Expected));
+        var lenient = ReportedTextReader.Read(text, ReadMode.Lenient);
+        Assert.Empty(lenient.Problems);
+        Assert.Equal(("yield", 0), (Assert.Single(lenient.Skipped).Kind, lenient.Skipped[0].Offset));
+        Assert.Single(Assert.Single(lenient.Spectra).Signals);
+    }
 
     [Theory]
     [MemberData(nameof(Rows))]

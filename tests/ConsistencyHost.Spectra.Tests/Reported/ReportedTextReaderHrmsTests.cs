@@ -34,10 +34,25 @@ public sealed class ReportedTextReaderHrmsTests
     [InlineData("HRMS (ESI) m/z: [M + H]+ calcd for C8H11N4O2, 195.0877; found 195.0875.", "ESI", "[M+H]+", "C8H11N4O2", 195.0877, 195.0875)]
     // Common practice: the ion in parentheses right after HRMS, no ionisation named.
     [InlineData("HRMS (M+H)+ calcd for C8H11N4O2 195.0877, found 195.0875.", null, "(M+H)+", "C8H11N4O2", 195.0877, 195.0875)]
-    public void Read_HrmsVariant_GivesClaim(string text, string? ionisation, string ion, string formula, double calcd, double found)
+    // Common practice (issue 13): a decimal comma, subscript and superscript formulas, the bracketed ion formula.
+    [InlineData("HRMS (ESI) m/z: [M + H]+ calcd for C10H14NO2 180,1019; found 180,1016.", "ESI", "[M+H]+", "C10H14NO2", 180.1019, 180.1016)]
+    [InlineData("HRMS (ESI) m/z: [M+H]⁺ calcd for C₈H₁₁N₄O₂⁺ 195.0877; found 195.0875.", "ESI", "[M+H]+", "C8H11N4O2+", 195.0877, 195.0875)]
+    [InlineData("HRMS (ESI) m/z: calcd for [C9H12NO2]+ 182.0812; found 182.0810.", "ESI", null, "C9H12NO2+", 182.0812, 182.0810)]
+    // Common practice: the RSC "found …, <formula> requires …" wording, and the mass error after the value.
+    [InlineData("HRMS (ESI) m/z: found 182.0810 [M+H]+, C9H12NO2 requires 182.0812.", "ESI", "[M+H]+", "C9H12NO2", 182.0812, 182.0810)]
+    [InlineData("HRMS (ESI): found [M+H]+ 182.0810. C9H12NO2 requires 182.0812", "ESI", "[M+H]+", "C9H12NO2", 182.0812, 182.0810)]
+    [InlineData("HRMS (ESI) m/z: [M+H]+ calcd for C9H12NO2 182.0812; found 182.0810 (Δ = −1.1 ppm).", "ESI", "[M+H]+", "C9H12NO2", 182.0812, 182.0810)]
+    [InlineData("HRMS (ESI) m/z: found 182.0810 (Δ = −1.1 ppm), C9H12NO2 requires 182.0812.", "ESI", null, "C9H12NO2", 182.0812, 182.0810)]
+    // Published corpus rows (tests/ConsistencyHost.Rules.Tests/Fixtures/published-si-entries.tsv), as printed.
+    [InlineData("HRMS m/z (ESI) calcd. for C18H18NO3 [M+H]+: 296.1287; found 296.1274.", "ESI", "[M+H]+", "C18H18NO3", 296.1287, 296.1274)] // si-028
+    [InlineData("HRMS (APCI-MS, positive): m/z = 396.0007. Calcd for C20H13IO: 396.0006 [M]+.", "APCI-MS, positive", "[M]+", "C20H13IO", 396.0006, 396.0007)] // si-140
+    [InlineData("HRMS for C16H15BrO2: calcd 318.0255, found 318.0245.", null, null, "C16H15BrO2", 318.0255, 318.0245)] // si-205
+    [InlineData("HRMS calcd for C16H10F3NO [M + H]+: 290.0787. Found: 290.0796.", null, "[M+H]+", "C16H10F3NO", 290.0787, 290.0796)] // si-021
+    public void Read_HrmsVariant_GivesClaim(string text, string? ionisation, string? ion, string formula, double calcd, double found)
     {
         var result = ReportedTextReader.Read(text);
         Assert.True(result.Succeeded, string.Join("; ", result.Problems.Select(p => p.Message)));
+        Assert.Empty(result.Problems);
         var claim = Assert.Single(result.Hrms);
         Assert.Equal((ionisation, ion, formula, calcd, (double?)found), (claim.Ionisation, claim.IonLabel, claim.IonFormula, claim.CalculatedMz, claim.FoundMz));
     }

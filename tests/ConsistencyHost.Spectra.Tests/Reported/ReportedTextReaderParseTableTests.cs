@@ -105,7 +105,7 @@ public sealed class ReportedTextReaderParseTableTests
         { Common, "1H NMR (400 MHz, CDCl3) δ 3.41 (s, 3H, rotamers 3:1), 3.38 (s, 3H, signals doubled due to rotamers)", "1H 400 CDCl3 | 3.41 s n3 !rotamers 3:1 ; 3.38 s n3 !signals doubled due to rotamers" },
         { Common, "1H NMR (400 MHz, CDCl3) δ 3.95 (AB quartet, J = 15.1 Hz, 2H)", "1H 400 CDCl3 | 3.95 AB quartet J15.1 n2" },
         { Common, "1H NMR (400 MHz, CDCl3) δ 9.10 (br, 1H, NH), 1.42 (s, 9H, 3 × CH3)", "1H 400 CDCl3 | 9.1 br m n1 @NH ; 1.42 s n9 @3 × CH3" },
-        { Common, "13C NMR (101 MHz, CDCl3) δ 128.5 (2 x CH), 127.9 (2×CH)", "13C 101 CDCl3 | 128.5 @2 x CH ; 127.9 @2×CH" },
+        { Common, "13C NMR (101 MHz, CDCl3) δ 128.5 (2 x CH), 127.9 (2×CH)", "13C 101 CDCl3 | 128.5 c2 @2 x CH ; 127.9 c2 @2×CH" },
         { Common, "1H NMR (400 MHz, CDCl3) δ 7.30–7.22 (m, 2H, overlapping with CHCl3)", "1H 400 CDCl3 | 7.22-7.3 m n2 !overlapping with CHCl3" },
         { Common, "1H NMR (400 MHz, CDCl3) δ 3.41* (s, 3H)", "1H 400 CDCl3 | 3.41 s n3 !*" },
         // Several spectra and HRMS in one text

@@ -15,7 +15,8 @@ internal static class SpectrumDescription
             s.Solvent,
             s.TemperatureK is { } t ? N(t) + "K" : null,
         }.Where(x => x is not null));
-        return head + " | " + string.Join(" ; ", s.Signals.Select(Of));
+        var notes = string.Concat(s.Notes.Select(n => " !" + n));
+        return head + notes + " | " + string.Join(" ; ", s.Signals.Select(Of));
     }
 
     public static string Of(Signal g)

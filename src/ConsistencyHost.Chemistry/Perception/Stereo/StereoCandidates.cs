@@ -35,9 +35,10 @@ internal static class StereoCandidates
         {
             if (status[c] == 1)
             {
+                var fixedByRings = RingJunctions.IsBridgedBridgehead(ctx, c);
                 tetra.Add(specifiedTetra.TryGetValue(c, out var t)
                     ? new TetrahedralElement(c, [.. t.Neighbours], t.Winding == TetrahedralWinding.Clockwise ? 1 : 0, true)
-                    : new TetrahedralElement(c, Slots(m, c), 0, false));
+                    : new TetrahedralElement(c, Slots(m, c), 0, false, FixedByRings: fixedByRings));
             }
             else if (status[c] == 0 && pairs[c].A == -2)
             {
@@ -67,16 +68,19 @@ internal static class StereoCandidates
     /// <summary>Four-ligand centres that keep their configuration on the NMR time scale: sp3 C and Si, quaternary
     /// N+, four-coordinate P (phosphates, phosphonates, phosphoramides, phosphonium), three-coordinate S with a lone
     /// pair (sulfoxides, sulfinamides, sulfonium) and four-coordinate S (sulfones, sulfonamides). Neutral amines
-    /// invert quickly and are not centres.</summary>
-    private static bool IsTetrahedralKind(Molecule m, int c)
+    /// invert quickly and are not centres, except a bridgehead N of a bridged ring system (quinuclidine, hexamine,
+    /// Tröger's base), whose inversion the bridges forbid.</summary>
+    private static bool IsTetrahedralKind(SymmetryContext ctx, int c)
     {
+        var m = ctx.Molecule;
         var a = m.Atoms[c];
         var degree = m.Degree(c);
         var sum = m.BondOrderSum(c);
         return a.AtomicNumber switch
         {
             6 or 14 => a.Charge == 0 && degree + a.HydrogenCount == 4 && sum == degree,
-            7 => a.Charge == 1 && degree == 4 && sum == 4,
+            7 => (a.Charge == 1 && degree == 4 && sum == 4)
+                || (a.Charge == 0 && degree == 3 && sum == 3 && a.HydrogenCount == 0 && !ctx.Aromaticity.AromaticAtoms[c] && RingJunctions.IsBridgedBridgehead(ctx, c)),
             15 => a.Charge is 0 or 1 && degree + a.HydrogenCount == 4,
             16 => a.HydrogenCount == 0 && ((degree == 3 && ((a.Charge == 0 && sum == 4) || (a.Charge == 1 && sum == 3))) || (degree == 4 && a.Charge == 0 && sum == 6)),
             _ => false,
@@ -94,7 +98,7 @@ internal static class StereoCandidates
         var m = ctx.Molecule;
         var a = m.Atoms[c];
         var degree = m.Degree(c);
-        if (!IsTetrahedralKind(m, c) || a.HydrogenCount > 1 || IsCageAtom(ctx, c))
+        if (!IsTetrahedralKind(ctx, c) || a.HydrogenCount > 1 || IsCageAtom(ctx, c))
         {
             return (0, (-1, -1));
         }
@@ -143,10 +147,11 @@ internal static class StereoCandidates
     }
 
     /// <summary>An sp3 centre that is not stereogenic still gets an arbitrary parity (marked by pair -2) when its
-    /// mirror image is reachable by a local flip: acyclic centres, and ring atoms in a single ring.</summary>
+    /// mirror image is reachable by a local flip: acyclic centres, ring atoms in a single ring, and spiro atoms (each
+    /// ring keeps its own faces, so the centre is prochiral like an acyclic one).</summary>
     private static int Demote(SymmetryContext ctx, (int A, int B)[] pairs, int c)
     {
-        if (RingBonds(ctx, c) <= 2)
+        if (RingBonds(ctx, c) <= 2 || RingJunctions.IsSpiro(ctx, c))
         {
             pairs[c] = (-2, -2);
         }
@@ -154,19 +159,11 @@ internal static class StereoCandidates
         return 0;
     }
 
-    private static int RingBonds(SymmetryContext ctx, int atom)
-    {
-        var n = 0;
-        foreach (var b in ctx.Molecule.BondsOf(atom))
-        {
-            n += ctx.Rings.BondInRing[b] ? 1 : 0;
-        }
+    private static int RingBonds(SymmetryContext ctx, int atom) => RingJunctions.RingBonds(ctx, atom);
 
-        return n;
-    }
-
-    /// <summary>A bridgehead whose ring neighbours are mostly bridgeheads too (cuneane, cubane, fullerene-like
-    /// cages): its configuration is fixed by the cage, so it is neither enumerated nor given an arbitrary parity.</summary>
+    /// <summary>A bridgehead whose ring neighbours are all bridgeheads too (cuneane, cubane, fullerene-like cages):
+    /// its configuration is fixed by the cage, so it is neither enumerated nor given an arbitrary parity. A
+    /// ring-fusion or spiro atom with an ordinary ring neighbour is not a cage atom: it can be a true stereocentre.</summary>
     private static bool IsCageAtom(SymmetryContext ctx, int atom)
     {
         if (RingBonds(ctx, atom) < 3)
@@ -174,13 +171,16 @@ internal static class StereoCandidates
             return false;
         }
 
-        var bridgeheadNeighbours = 0;
-        foreach (var x in ctx.Molecule.Neighbours(atom))
+        var m = ctx.Molecule;
+        foreach (var b in m.BondsOf(atom))
         {
-            bridgeheadNeighbours += RingBonds(ctx, x) >= 3 ? 1 : 0;
+            if (ctx.Rings.BondInRing[b] && RingBonds(ctx, m.Bonds[b].Other(atom)) < 3)
+            {
+                return false;
+            }
         }
 
-        return bridgeheadNeighbours >= 2;
+        return true;
     }
 
     private static bool SharesRingWithCandidate(SymmetryContext ctx, int[] status, int c)

@@ -6,9 +6,12 @@ namespace ConsistencyHost.Chemistry.Perception.Stereo;
 /// <param name="Parity">0 anticlockwise ('@'), 1 clockwise ('@@').</param>
 /// <param name="Specified">True when the parity is fixed (from the input, or arbitrary for a non-stereogenic
 /// centre); false when it is assigned while enumerating.</param>
+/// <param name="FixedByRings">A bridgehead of a bridged ring system: its configuration is set by the rings, not
+/// free. Unspecified ones are enumerated, but only the most symmetric assignment (the strain-free out,out
+/// geometry of small bridged systems) is kept for each assignment of the free elements.</param>
 /// <param name="Stereogenic">True for a stereocentre (its configuration matters); false for an sp3 centre with
 /// two equal ligands whose arbitrary parity only serves the topicity bookkeeping of Algorithm A.</param>
-internal sealed record TetrahedralElement(int Centre, int[] Neighbours, int Parity, bool Specified, bool Stereogenic = true);
+internal sealed record TetrahedralElement(int Centre, int[] Neighbours, int Parity, bool Specified, bool Stereogenic = true, bool FixedByRings = false);
 
 /// <summary>A double-bond stereo element for symmetry bookkeeping.</summary>
 /// <param name="Begin">One end atom.</param>

@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using ConsistencyHost.Chemistry.Model;
+using ConsistencyHost.Chemistry.Perception.Rings;
 using ConsistencyHost.Chemistry.Perception.Stereo;
 
 namespace ConsistencyHost.Chemistry.Perception.Symmetry;
@@ -51,6 +52,12 @@ public sealed class NmrEquivalence
     /// perfluoroalkyl chains); classes may then be split more finely than the true symmetry allows.</summary>
     public bool IsExact { get; private init; } = true;
 
+    /// <summary>The smallest set of smallest rings the classes were perceived on (shared so later steps need not perceive it again).</summary>
+    public required RingSet Rings { get; init; }
+
+    /// <summary>The aromaticity the classes were perceived with (shared with <see cref="Rings"/>).</summary>
+    public required Aromaticity Aromaticity { get; init; }
+
     /// <summary>Number of relative configurations evaluated (1 when all stereo is specified or absent).</summary>
     public int ConfigurationsConsidered { get; }
 
@@ -77,16 +84,20 @@ public sealed class NmrEquivalence
             }
         }
 
+        (stats, elements) = RingFixedConfigurations.KeepMostSymmetric(stats, elements);
         var best = stats.MaxBy(s => s.HydrogenClassCount)!;
         var slow = SlowRotation(ctx, group, elements[stats.IndexOf(best)], constitutionalOrbit);
         var hydrogens = CouplingPartners.Attach(molecule, ctx.Aromaticity, HydrogenClassBuilder.Build(molecule, best.Symmetry));
         var carbons = CarbonClasses(molecule, best.Symmetry.Orbit);
         var unspecified = StereoEnumeration.UnspecifiedCount(tetra, doubles);
         var exact = !ctx.Search.BudgetExceeded;
-        return new NmrEquivalence(hydrogens, carbons, constitutional,
-            SignalCountRanges.Hydrogen(stats, unspecified, independent, exact, slow), SignalCountRanges.Carbon(stats, unspecified, independent, exact, slow), stats.Count)
+        var (h, c) = MetalGeometry.Widen(molecule, constitutionalOrbit, hydrogens, carbons,
+            SignalCountRanges.Hydrogen(stats, unspecified, independent, exact, slow), SignalCountRanges.Carbon(stats, unspecified, independent, exact, slow));
+        return new NmrEquivalence(hydrogens, carbons, constitutional, h, c, stats.Count)
         {
             IsExact = exact,
+            Rings = ctx.Rings,
+            Aromaticity = ctx.Aromaticity,
         };
     }
 

@@ -37,6 +37,15 @@ public sealed record ProtonInterpretation
     /// <summary>True when the data read better with slow amide C–N rotation (N-substituents distinct).</summary>
     public bool SlowAmideRotation { get; init; }
 
+    /// <summary>
+    /// Stated proton count per signal, with the shares of the minor-rotamer signals paired with it added
+    /// (<see cref="RotamerShares"/>); null where no count is stated.
+    /// </summary>
+    public IReadOnlyList<double?> StatedCounts { get; init; } = [];
+
+    /// <summary>Minor-rotamer signal index → the compound signal whose environment it shares.</summary>
+    public IReadOnlyDictionary<int, int> RotamerPairs { get; init; } = new Dictionary<int, int>();
+
     /// <summary>What the residual matcher found (all matches, before interpretation).</summary>
     public required ResidualMatchResult Residuals { get; init; }
 

@@ -21,8 +21,10 @@ public static class ProtonInterpreter
         var splits = AmideRotation.Splits(molecule, equivalence).Hydrogen;
         var residuals = new ResidualMatcher(matchOptions).Match(spectrum);
         var minor = spectrum.Signals.Select(s => s.IsMinorSpecies()).ToArray();
-        var candidates = Candidates(residuals, spectrum.Signals, molecule, minor);
-        var (counts, fit) = ProtonCounts(spectrum.Signals, minor, fast);
+        var rotamerPairs = RotamerShares.Pair(spectrum.Signals, minor);
+        var stated = RotamerShares.Summed(spectrum.Signals, rotamerPairs);
+        var candidates = Candidates(residuals, spectrum.Signals, molecule, minor, stated);
+        var (counts, fit) = ProtonCounts(spectrum.Signals, stated, minor, fast);
         var best = Choose(spectrum.Signals, counts, minor, candidates, fast);
         var classes = fast;
         if (splits.Count > 0 && !IsPerfect(best))
@@ -51,12 +53,22 @@ public static class ProtonInterpreter
             IntegralFit = fit,
             Residuals = residuals,
             SlowAmideRotation = !ReferenceEquals(classes, fast),
+            StatedCounts = stated,
+            RotamerPairs = rotamerPairs,
         };
     }
 
 
+    /// <summary>
+    /// A signal the author integrated to this many protons or more is the compound's, never water: a water trace is
+    /// one exchange-averaged line that authors leave unintegrated or integrate to a fraction or to 2 H (its
+    /// H2O), while a 3 H or 9 H singlet in the water window is a methyl or tert-butyl group (common practice).
+    /// Reading such a line as water would hide a wrong structure behind a water warning.
+    /// </summary>
+    private const double MinCompoundCountNotWater = 2.5;
+
     /// <summary>Signals that may not be the compound's, each with the role it would have.</summary>
-    private static Dictionary<int, SignalRole> Candidates(ResidualMatchResult residuals, IReadOnlyList<Signal> signals, Molecule molecule, bool[] minor)
+    private static Dictionary<int, SignalRole> Candidates(ResidualMatchResult residuals, IReadOnlyList<Signal> signals, Molecule molecule, bool[] minor, double?[] stated)
     {
         var selfImpurities = residuals.Impurities.Where(e => SameCompound.Is(molecule, e.Impurity.Smiles)).Select(e => e.Impurity.Name).ToHashSet(StringComparer.Ordinal);
         var credible = residuals.Impurities.Where(e => e.MeetsMinimum).Select(e => e.Impurity.Name).ToHashSet(StringComparer.Ordinal);
@@ -65,6 +77,7 @@ public static class ProtonInterpreter
         {
             if (minor[match.SignalIndex] || result.ContainsKey(match.SignalIndex)) continue;
             if (!ResidualShape.Fits(signals[match.SignalIndex], match)) continue;
+            if (match.Kind == ResidualMatchKind.Water && stated[match.SignalIndex] >= MinCompoundCountNotWater) continue;
             var role = match.Kind switch
             {
                 ResidualMatchKind.ResidualSolvent => SignalRole.ResidualSolvent,
@@ -78,9 +91,10 @@ public static class ProtonInterpreter
         return result;
     }
 
-    private static (int?[] Counts, IntegralFit? Fit) ProtonCounts(IReadOnlyList<Signal> signals, bool[] minor, IReadOnlyList<ClassInput> classes)
+    private static (int?[] Counts, IntegralFit? Fit) ProtonCounts(IReadOnlyList<Signal> signals, double?[] stated, bool[] minor, IReadOnlyList<ClassInput> classes)
     {
-        var counts = signals.Select(s => s.ProtonCount is { } n ? (int?)(int)Math.Round(n) : null).ToArray();
+        // Stated counts with rotamer shares already summed, so a 5.4 H + 3.6 H pair is 9 H, never 5 H.
+        var counts = stated.Select(n => n is { } v ? (int?)(int)Math.Round(v) : null).ToArray();
         var counted = Enumerable.Range(0, signals.Count).Where(i => !minor[i]).ToList();
         if (counted.All(i => counts[i] is not null) || !counted.All(i => signals[i].Integral is > 0))
         {

@@ -33,6 +33,18 @@ public sealed class PredictionContext
         return new PredictionContext(molecule, rings, Aromaticity.Of(molecule, rings));
     }
 
+    /// <summary>
+    /// The context of <paramref name="molecule"/> from rings and aromaticity already perceived for it (those the
+    /// equivalence perception keeps), so a check does not perceive them twice.
+    /// </summary>
+    public static PredictionContext Of(Molecule molecule, RingSet rings, Aromaticity aromaticity)
+    {
+        ArgumentNullException.ThrowIfNull(molecule);
+        ArgumentNullException.ThrowIfNull(rings);
+        ArgumentNullException.ThrowIfNull(aromaticity);
+        return new PredictionContext(molecule, rings, aromaticity);
+    }
+
     // Per-molecule facts of the carbon tables (Carbon/Core/RingFacts, Carbon/Aromatic/AromaticFacts), computed on
     // first use and kept here rather than in a static weak table: every checked entry brings a new context, and
     // weak-table entries are dependent GC handles that every collection has to trace.
