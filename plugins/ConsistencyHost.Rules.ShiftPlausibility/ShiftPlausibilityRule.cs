@@ -1,4 +1,6 @@
+using System.Collections.Immutable;
 using System.Globalization;
+using System.Text;
 using ConsistencyHost.Sdk.Entries;
 using ConsistencyHost.Sdk.Findings;
 using ConsistencyHost.Sdk.Rules;
@@ -44,8 +46,8 @@ public sealed class ShiftPlausibilityRule : Rule<ShiftPlausibilityOptions>
         var classes = perception.Equivalence.HydrogenClasses;
         var table = new ClassTable(
             "1H", shifts.Hydrogen, options.ProtonSlackPpm, options.ProtonFarPpm,
-            c => [.. classes[c].ParentAtoms.Distinct()],
-            c => $"{classes[c].ParentAtoms.Length} H on {Atoms(perception, classes[c].ParentAtoms)}",
+            c => DistinctAtoms(classes[c].ParentAtoms),
+            c => string.Create(CultureInfo.InvariantCulture, $"{classes[c].ParentAtoms.Length} H on {Atoms(perception, classes[c].ParentAtoms)}"),
             c => !classes[c].IsExchangeable);
         var assigned = AssignedClasses(interpretation);
         return table.Judge(entry.Spectra[index], index, interpretation.CompoundSignals, s => assigned.GetValueOrDefault(s));
@@ -121,6 +123,29 @@ public sealed class ShiftPlausibilityRule : Rule<ShiftPlausibilityOptions>
         return sources;
     }
 
-    private static string Atoms(StructurePerception perception, IEnumerable<int> atoms) =>
-        string.Join(",", atoms.Distinct().Select(a => perception.Molecule.Atoms[a].Symbol + a.ToString(CultureInfo.InvariantCulture)));
+    /// <summary>"C4,C7": each atom once, in first-seen order.</summary>
+    private static string Atoms(StructurePerception perception, ImmutableArray<int> atoms)
+    {
+        var text = new StringBuilder();
+        for (var i = 0; i < atoms.Length; i++)
+        {
+            if (atoms.IndexOf(atoms[i]) < i) continue;
+            if (text.Length > 0) text.Append(',');
+            text.Append(CultureInfo.InvariantCulture, $"{perception.Molecule.Atoms[atoms[i]].Symbol}{atoms[i]}");
+        }
+
+        return text.ToString();
+    }
+
+    /// <summary>Each atom once, in first-seen order (a hydrogen class lists its parent once per H).</summary>
+    private static int[] DistinctAtoms(ImmutableArray<int> atoms)
+    {
+        var kept = new List<int>(atoms.Length);
+        foreach (var atom in atoms)
+        {
+            if (!kept.Contains(atom)) kept.Add(atom);
+        }
+
+        return [.. kept];
+    }
 }
