@@ -42,6 +42,7 @@ public sealed record EngineOptions
         "ConsistencyHost.Rules.IntegralRatio",
         "ConsistencyHost.Rules.MassFormula",
         "ConsistencyHost.Rules.SignalCount",
+        "ConsistencyHost.Rules.ShiftPlausibility",
         "ConsistencyHost.Rules.SolventResidual",
         "ConsistencyHost.Rules.SpectrumMetadata",
     };

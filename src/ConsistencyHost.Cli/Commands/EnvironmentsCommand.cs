@@ -5,6 +5,7 @@ using ConsistencyHost.Chemistry.Perception.Environments;
 using ConsistencyHost.Chemistry.Perception.Symmetry;
 using ConsistencyHost.Cli.CommandLine;
 using ConsistencyHost.Cli.Output;
+using ConsistencyHost.Spectra.Analysis.Prediction;
 
 namespace ConsistencyHost.Cli.Commands;
 
@@ -21,9 +22,10 @@ internal static class EnvironmentsCommand
         ["--molfile"] = "--molfile",
         ["--file"] = "--file",
         ["--format"] = "--format",
+        ["--solvent"] = "--solvent",
     };
 
-    public const string Usage = "environments (--smiles TEXT | --molfile PATH | FILE.smi|FILE.sdf) [--format text|json]";
+    public const string Usage = "environments (--smiles TEXT | --molfile PATH | FILE.smi|FILE.sdf) [--format text|json] [--solvent NAME]";
 
     public static int Run(IReadOnlyList<string> raw, TextWriter stdout)
     {
@@ -34,13 +36,14 @@ internal static class EnvironmentsCommand
         {
             if (item.Molecule is null && single) throw new UsageException(item.Error!);
             var report = item.Molecule is null ? null : EnvironmentReport.Describe(item.Molecule);
-            stdout.Write(format == OutputFormat.Json ? Json(item, report) + "\n" : Text(item, report));
+            var shifts = item.Molecule is null ? null : ShiftWindowsOutput.Predict(item.Molecule, args.Value("--solvent"));
+            stdout.Write(format == OutputFormat.Json ? Json(item, report, shifts) + "\n" : Text(item, report) + (shifts is null ? "" : ShiftWindowsOutput.Text(shifts) + "\n"));
         }
 
         return ExitCodes.Ok;
     }
 
-    private static string Json(StructureItem item, EnvironmentReport? report)
+    private static string Json(StructureItem item, EnvironmentReport? report, ClassShifts? shifts)
     {
         using var buffer = new MemoryStream();
         using (var json = new Utf8JsonWriter(buffer))
@@ -61,6 +64,7 @@ internal static class EnvironmentsCommand
                 WriteClasses(json, "hydrogenClasses", report.HydrogenClasses);
                 WriteRange(json, "expected1H", report.Expected1H);
                 WriteRange(json, "expected13C", report.Expected13C);
+                if (shifts is not null) ShiftWindowsOutput.Json(json, shifts);
                 CouplingTreeOutput.Json(json, CouplingTreeOutput.Of(item.Molecule!));
             }
 

@@ -1,3 +1,4 @@
+using System.Collections.Concurrent;
 using ConsistencyHost.Spectra.Analysis.Interpretation;
 using ConsistencyHost.Spectra.Analysis.Prediction;
 using ConsistencyHost.Spectra.Analysis.Prediction.Coupling;
@@ -13,6 +14,7 @@ namespace ConsistencyHost.Sdk.Entries;
 public sealed class EntryAnalysis
 {
     private readonly Lazy<ProtonInterpretation?>[] _protons;
+    private readonly ConcurrentDictionary<string, Lazy<ClassShifts>> _shiftsBySolvent = new(StringComparer.Ordinal);
     private readonly Lazy<IReadOnlyList<CouplingTree>?> _couplings;
 
     /// <summary>Prepares lazy analyses for <paramref name="spectra"/> against <paramref name="perception"/>.</summary>
@@ -37,14 +39,30 @@ public sealed class EntryAnalysis
         spectrumIndex >= 0 && spectrumIndex < _protons.Length ? _protons[spectrumIndex].Value : null;
 
     /// <summary>
+    /// The predicted 1H and 13C shift window of every class of the structure in the solvent of the spectrum at
+    /// <paramref name="spectrumIndex"/>; computed once per solvent and shared. Null when the entry has no
+    /// structure or the index is out of range.
+    /// </summary>
+    public ClassShifts? Shifts(int spectrumIndex) =>
+        spectrumIndex >= 0 && spectrumIndex < Spectra.Count ? ShiftsIn(Spectra[spectrumIndex].Solvent) : null;
+
+    /// <summary>The predicted class windows in <paramref name="solvent"/> (any spelling; null when not stated); null without a structure.</summary>
+    public ClassShifts? ShiftsIn(string? solvent)
+    {
+        if (Perception is not { } perception) return null;
+        var key = SolventNames.Normalise(solvent) ?? "";
+        return _shiftsBySolvent.GetOrAdd(key, _ => new Lazy<ClassShifts>(
+            () => ClassShifts.Of(perception.Prediction, perception.Equivalence, solvent), LazyThreadSafetyMode.ExecutionAndPublication)).Value;
+    }
+
+    /// <summary>
     /// The first-order coupling tree of every hydrogen class (in class order), built once per entry; null when
     /// the entry has no structure.
     /// </summary>
     public IReadOnlyList<CouplingTree>? Couplings => _couplings.Value;
 
     private static IReadOnlyList<CouplingTree>? BuildCouplings(StructurePerception? perception) =>
-        perception is null ? null : CouplingTreeBuilder.Build(
-            PredictionContext.Of(perception.Molecule, perception.Equivalence.Rings, perception.Equivalence.Aromaticity), perception.Equivalence);
+        perception is null ? null : CouplingTreeBuilder.Build(perception.Prediction, perception.Equivalence);
 
     private static ProtonInterpretation? InterpretProtons(Spectrum spectrum, StructurePerception? perception) =>
         spectrum.Nucleus == Nucleus.H1 && perception is not null

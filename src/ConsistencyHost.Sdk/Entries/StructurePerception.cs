@@ -1,6 +1,7 @@
 using ConsistencyHost.Chemistry.Model;
 using ConsistencyHost.Chemistry.Perception.Formula;
 using ConsistencyHost.Chemistry.Perception.Symmetry;
+using ConsistencyHost.Spectra.Analysis.Prediction;
 
 namespace ConsistencyHost.Sdk.Entries;
 
@@ -12,6 +13,7 @@ public sealed class StructurePerception
 {
     private readonly Lazy<MolecularFormula> _formula;
     private readonly Lazy<NmrEquivalence> _equivalence;
+    private readonly Lazy<PredictionContext> _prediction;
 
     /// <summary>Starts lazy perception of <paramref name="molecule"/>.</summary>
     public StructurePerception(Molecule molecule)
@@ -19,6 +21,9 @@ public sealed class StructurePerception
         Molecule = molecule ?? throw new ArgumentNullException(nameof(molecule));
         _formula = new Lazy<MolecularFormula>(() => MolecularFormula.Of(molecule), LazyThreadSafetyMode.ExecutionAndPublication);
         _equivalence = new Lazy<NmrEquivalence>(() => NmrEquivalence.Of(molecule), LazyThreadSafetyMode.ExecutionAndPublication);
+        // Reuses the rings and aromaticity the equivalence perception already found, so a check perceives them once.
+        _prediction = new Lazy<PredictionContext>(
+            () => PredictionContext.Of(molecule, Equivalence.Rings, Equivalence.Aromaticity), LazyThreadSafetyMode.ExecutionAndPublication);
     }
 
     /// <summary>The molecule perceived.</summary>
@@ -29,4 +34,7 @@ public sealed class StructurePerception
 
     /// <summary>Stereo-aware hydrogen and carbon classes, coupling partners and expected signal counts.</summary>
     public NmrEquivalence Equivalence => _equivalence.Value;
+
+    /// <summary>Rings and perceived aromaticity, as the shift and coupling predictions read them.</summary>
+    public PredictionContext Prediction => _prediction.Value;
 }

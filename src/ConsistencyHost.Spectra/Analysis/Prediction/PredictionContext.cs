@@ -45,6 +45,17 @@ public sealed class PredictionContext
         return new PredictionContext(molecule, rings, aromaticity);
     }
 
+    // Per-molecule facts of the carbon tables (Carbon/Core/RingFacts, Carbon/Aromatic/AromaticFacts), computed on
+    // first use and kept here rather than in a static weak table: every checked entry brings a new context, and
+    // weak-table entries are dependent GC handles that every collection has to trace.
+    internal Carbon.Core.RingFacts? RingFactsSlot;
+    internal Carbon.Aromatic.AromaticFacts? AromaticFactsSlot;
+
+    /// <summary>The value in <paramref name="slot"/>, computed and published once (a racing thread's copy is dropped).</summary>
+    internal T Facts<T>(ref T? slot, Func<PredictionContext, T> compute)
+        where T : class =>
+        Volatile.Read(ref slot) ?? Interlocked.CompareExchange(ref slot, compute(this), null) ?? slot!;
+
     /// <summary>True when the atom is perceived aromatic.</summary>
     public bool IsAromatic(int atom) => Aromaticity.AromaticAtoms[atom];
 

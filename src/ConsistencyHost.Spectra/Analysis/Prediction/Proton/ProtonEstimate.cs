@@ -3,12 +3,14 @@ namespace ConsistencyHost.Spectra.Analysis.Prediction.Proton;
 /// <summary>
 /// Builds one window: a base value, additive increments, the half-width contributions that follow the method's
 /// error, and any further values the window must cover (other geometry, the second H of a CH2). Reasons are kept
-/// in the order they were applied.
+/// in the order they were applied, as data: they are written only when read (<see cref="ProtonReasonList"/>).
 /// </summary>
 internal sealed class ProtonEstimate
 {
-    private readonly List<string> reasons = new(8);
-    private readonly List<(double Ppm, string Why)> widths = new(4);
+    private ProtonReason[] reasons = new ProtonReason[8];
+    private int reasonCount;
+    private WidthPart[]? widths;
+    private int widthCount;
     private double lowest;
     private double highest;
     private double lowExtra;
@@ -21,30 +23,45 @@ internal sealed class ProtonEstimate
     public double HalfWidth { get; private set; }
 
     /// <summary>Starts from a base or tabulated value.</summary>
-    public ProtonEstimate Start(double value, string what)
+    public ProtonEstimate Start(double value, string what) => Start(value, null, what);
+
+    /// <summary>Starts from a value labelled <paramref name="prefix"/> + <paramref name="what"/>, joined only when read.</summary>
+    public ProtonEstimate Start(double value, string? prefix, string what)
     {
         Value = lowest = highest = value;
-        reasons.Add(what + " " + Ppm.Plain(value));
+        Append(new ProtonReason(ProtonReasonKind.Value, prefix, what, value));
         return this;
     }
 
     /// <summary>Adds an increment ("α-OC(=O)R +2.80").</summary>
-    public void Add(double delta, string what)
+    public void Add(double delta, string what) => Add(delta, null, what);
+
+    /// <summary>Adds an increment labelled <paramref name="prefix"/> + <paramref name="what"/> ("α-" + "OH"), joined only when read.</summary>
+    public void Add(double delta, string? prefix, string what)
     {
         Value += delta;
         lowest += delta;
         highest += delta;
-        reasons.Add(what + " " + Ppm.Signed(delta));
+        Append(new ProtonReason(ProtonReasonKind.Change, prefix, what, delta));
     }
 
     /// <summary>Notes a fact that changes nothing numerically.</summary>
-    public void Note(string reason) => reasons.Add(reason);
+    public void Note(string reason) => Append(new ProtonReason(ProtonReasonKind.Note, null, reason, 0));
 
     /// <summary>Adds to the symmetric half-width, with why.</summary>
-    public void Widen(double ppm, string why)
+    public void Widen(double ppm, string why) => Widen(ppm, 0, why);
+
+    /// <summary>Adds to the symmetric half-width for <paramref name="count"/> things, written "3 substituents".</summary>
+    public void Widen(double ppm, int count, string why)
     {
         HalfWidth += ppm;
-        widths.Add((ppm, why));
+        widths ??= new WidthPart[4];
+        if (widthCount == widths.Length)
+        {
+            Array.Resize(ref widths, widthCount * 2);
+        }
+
+        widths[widthCount++] = new WidthPart(ppm, why, count);
     }
 
     /// <summary>Makes the window also cover <paramref name="value"/> (another geometry, another H on the atom).</summary>
@@ -52,15 +69,18 @@ internal sealed class ProtonEstimate
     {
         lowest = Math.Min(lowest, value);
         highest = Math.Max(highest, value);
-        reasons.Add(why + " " + Ppm.Plain(value));
+        Append(new ProtonReason(ProtonReasonKind.Value, null, why, value));
     }
 
     /// <summary>Stretches one side only (solvent effects that move a signal one way).</summary>
-    public void Stretch(double down, double up, string why)
+    public void Stretch(double down, double up, string why) => Stretch(down, up, null, why);
+
+    /// <summary>Stretches one side only, the reason written <paramref name="prefix"/> + <paramref name="why"/> when read.</summary>
+    public void Stretch(double down, double up, string? prefix, string why)
     {
         lowExtra += down;
         highExtra += up;
-        reasons.Add(why);
+        Append(new ProtonReason(ProtonReasonKind.Note, prefix, why, 0));
     }
 
     /// <summary>Moves the estimate and everything covered by <paramref name="delta"/> (a solvent shift).</summary>
@@ -69,23 +89,17 @@ internal sealed class ProtonEstimate
     /// <summary>The prediction with its window: [lowest − half-width, highest + half-width] plus one-sided stretches.</summary>
     public ShiftPrediction Finish(ShiftBasis basis)
     {
-        if (widths.Count > 0)
-        {
-            reasons.Add(WidthReason());
-        }
-
         var window = new ShiftWindow(lowest - HalfWidth - lowExtra, highest + HalfWidth + highExtra, Value);
-        return new ShiftPrediction(window, basis, reasons);
+        return new ShiftPrediction(window, basis, new ProtonReasonList(reasons, reasonCount, widths, widthCount, HalfWidth));
     }
 
-    private string WidthReason()
+    private void Append(ProtonReason reason)
     {
-        var text = "±" + Ppm.Plain(HalfWidth) + ":";
-        for (var i = 0; i < widths.Count; i++)
+        if (reasonCount == reasons.Length)
         {
-            text += (i == 0 ? " " : ", ") + widths[i].Why + (i == 0 ? " " + Ppm.Plain(widths[i].Ppm) : " " + Ppm.Signed(widths[i].Ppm));
+            Array.Resize(ref reasons, reasonCount * 2);
         }
 
-        return text;
+        reasons[reasonCount++] = reason;
     }
 }

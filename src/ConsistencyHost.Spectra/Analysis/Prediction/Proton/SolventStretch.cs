@@ -9,6 +9,9 @@ namespace ConsistencyHost.Spectra.Analysis.Prediction.Proton;
 /// the C6D6 values quoted here from memory of the same table).</remarks>
 internal static class SolventStretch
 {
+    private static readonly string AromaticSolventNearPolar = "aromatic solvent: up to " + Ppm.Signed(-0.75) + " (solvent-induced shift)";
+    private static readonly string AromaticSolvent = "aromatic solvent: up to " + Ppm.Signed(-0.4) + " (solvent-induced shift)";
+
     /// <summary>Stretches the window for <paramref name="solvent"/>.</summary>
     /// <param name="estimate">The window being built.</param>
     /// <param name="solvent">Canonical solvent name or null.</param>
@@ -20,19 +23,19 @@ internal static class SolventStretch
             case "CDCl3" or "CD2Cl2":
                 return;
             case "C6D6" or "toluene-d8":
-                estimate.Stretch(nearPolarGroup ? 0.75 : 0.4, 0.05, "aromatic solvent: up to " + Ppm.Signed(nearPolarGroup ? -0.75 : -0.4) + " (solvent-induced shift)");
+                estimate.Stretch(nearPolarGroup ? 0.75 : 0.4, 0.05, nearPolarGroup ? AromaticSolventNearPolar : AromaticSolvent);
                 return;
             case "DMSO-d6":
                 estimate.Stretch(0.1, 0.1, "DMSO-d6: ±0.10 against CDCl3 data");
                 return;
             case "D2O" or "CD3OD":
-                estimate.Stretch(0.15, 0.15, solvent + ": ±0.15 against CDCl3 data");
+                estimate.Stretch(0.15, 0.15, solvent, ": ±0.15 against CDCl3 data");
                 return;
             case null:
                 estimate.Stretch(0.1, 0.1, "solvent not given: ±0.10");
                 return;
             default:
-                estimate.Stretch(0.1, 0.1, solvent + ": ±0.10 against CDCl3 data");
+                estimate.Stretch(0.1, 0.1, solvent, ": ±0.10 against CDCl3 data");
                 return;
         }
     }

@@ -1,5 +1,3 @@
-using System.Runtime.CompilerServices;
-
 namespace ConsistencyHost.Spectra.Analysis.Prediction.Carbon.Aromatic;
 
 /// <summary>
@@ -8,8 +6,6 @@ namespace ConsistencyHost.Spectra.Analysis.Prediction.Carbon.Aromatic;
 /// </summary>
 internal sealed class AromaticFacts
 {
-    private static readonly ConditionalWeakTable<PredictionContext, AromaticFacts> Cache = new();
-
     private AromaticFacts(int atomCount)
     {
         Template = new RingTemplate?[atomCount];
@@ -47,21 +43,8 @@ internal sealed class AromaticFacts
     /// <summary>True when the atom's system has a pyrrole-type N bearing H.</summary>
     public bool[] TautomericNH { get; }
 
-    [ThreadStatic]
-    private static (PredictionContext? Context, AromaticFacts? Facts) last;
-
-    /// <summary>The facts of <paramref name="context"/>'s molecule (the last one asked for on this thread is kept at hand).</summary>
-    public static AromaticFacts Of(PredictionContext context)
-    {
-        if (ReferenceEquals(last.Context, context))
-        {
-            return last.Facts!;
-        }
-
-        var facts = Cache.GetValue(context, Compute);
-        last = (context, facts);
-        return facts;
-    }
+    /// <summary>The facts of <paramref name="context"/>'s molecule, computed once and kept by the context.</summary>
+    public static AromaticFacts Of(PredictionContext context) => context.Facts(ref context.AromaticFactsSlot, Compute);
 
     private static AromaticFacts Compute(PredictionContext context)
     {

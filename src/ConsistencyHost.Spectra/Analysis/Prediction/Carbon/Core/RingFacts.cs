@@ -1,5 +1,3 @@
-using System.Runtime.CompilerServices;
-
 namespace ConsistencyHost.Spectra.Analysis.Prediction.Carbon.Core;
 
 /// <summary>
@@ -8,8 +6,6 @@ namespace ConsistencyHost.Spectra.Analysis.Prediction.Carbon.Core;
 /// </summary>
 internal sealed class RingFacts
 {
-    private static readonly ConditionalWeakTable<PredictionContext, RingFacts> Cache = new();
-
     private RingFacts(int[] smallest, int[] count, int[] hetero, int[] smallestRing)
     {
         SmallestSize = smallest;
@@ -30,21 +26,8 @@ internal sealed class RingFacts
     /// <summary>Index of the atom's smallest ring in <see cref="PredictionContext.Rings"/> (−1 when acyclic).</summary>
     public int[] SmallestRingIndex { get; }
 
-    [ThreadStatic]
-    private static (PredictionContext? Context, RingFacts? Facts) last;
-
-    /// <summary>The facts of <paramref name="context"/>'s molecule (the last one asked for on this thread is kept at hand).</summary>
-    public static RingFacts Of(PredictionContext context)
-    {
-        if (ReferenceEquals(last.Context, context))
-        {
-            return last.Facts!;
-        }
-
-        var facts = Cache.GetValue(context, Compute);
-        last = (context, facts);
-        return facts;
-    }
+    /// <summary>The facts of <paramref name="context"/>'s molecule, computed once and kept by the context.</summary>
+    public static RingFacts Of(PredictionContext context) => context.Facts(ref context.RingFactsSlot, Compute);
 
     private static RingFacts Compute(PredictionContext context)
     {

@@ -19,13 +19,13 @@ internal static class AliphaticShifts
     private static ShiftPrediction ByIncrements(PredictionContext context, int carbon, string? solvent)
     {
         var hydrogens = context.Molecule.Atoms[carbon].HydrogenCount;
-        var estimate = new ProtonEstimate().Start(AlkylIncrements.BaseFor(hydrogens), "base " + GroupName(hydrogens) + " (Beauchamp–Marquez)");
+        var estimate = new ProtonEstimate().Start(AlkylIncrements.BaseFor(hydrogens), BaseLabel(hydrogens));
         estimate.Widen(hydrogens >= 3 ? 0.25 : hydrogens == 2 ? 0.30 : 0.35, "additivity error");
         var tally = new IncrementTally(context, estimate);
         SubstituentWalk.Walk(context, carbon, ref tally, static (int level, int carrier, int atom, ref IncrementTally t) => t.Apply(level, carrier, atom));
         tally.DampCrowdedAlpha();
-        if (tally.AlphaGroups > 1) estimate.Widen(0.10 * (tally.AlphaGroups - 1), $"{tally.AlphaGroups} α groups");
-        if (tally.FurtherGroups > 0) estimate.Widen(0.05 * Math.Min(3, tally.FurtherGroups), $"{tally.FurtherGroups} β/γ groups");
+        if (tally.AlphaGroups > 1) estimate.Widen(0.10 * (tally.AlphaGroups - 1), tally.AlphaGroups, "α groups");
+        if (tally.FurtherGroups > 0) estimate.Widen(0.05 * Math.Min(3, tally.FurtherGroups), tally.FurtherGroups, "β/γ groups");
         if (tally.ApproximateRows > 0) estimate.Widen(tally.ApproximateRows, "approximate rows");
         ApplyRing(context, carbon, estimate);
         if (NearbyRings.HasAromaticWithin(context, carbon, 4, skipAlpha: true))
@@ -46,7 +46,7 @@ internal static class AliphaticShifts
             return;
         }
 
-        estimate.Add(delta, $"{size}-membered ring");
+        estimate.Add(delta, size < RingLabels.Length ? RingLabels[size] : $"{size}-membered ring");
         estimate.Widen(width, "ring (axial/equatorial, parent spread)");
         if (size >= 6 && NearbyRings.IsNextToRingAmideNitrogen(context, carbon))
         {
@@ -57,5 +57,13 @@ internal static class AliphaticShifts
         if (rings > 1) estimate.Widen(0.1, "fused or bridged");
     }
 
-    private static string GroupName(int hydrogens) => hydrogens switch { >= 3 => "CH3", 2 => "CH2", _ => "CH" };
+    private static string BaseLabel(int hydrogens) => hydrogens switch
+    {
+        >= 3 => "base CH3 (Beauchamp–Marquez)",
+        2 => "base CH2 (Beauchamp–Marquez)",
+        _ => "base CH (Beauchamp–Marquez)",
+    };
+
+    // "3-membered ring" … "12-membered ring", written once instead of per window.
+    private static readonly string[] RingLabels = [.. Enumerable.Range(0, 13).Select(size => $"{size}-membered ring")];
 }

@@ -12,7 +12,7 @@ namespace ConsistencyHost.Spectra.Analysis.Prediction.Proton.Aliphatic;
 /// </summary>
 internal struct IncrementTally(PredictionContext context, ProtonEstimate estimate)
 {
-    private static readonly string[] Positions = ["", "α", "β", "γ"];
+    private static readonly string[] PositionPrefixes = ["", "α-", "β-", "γ-"];
     private int lastCarrier = -1;
     private double largestAlpha;
     private double secondAlpha;
@@ -50,7 +50,7 @@ internal struct IncrementTally(PredictionContext context, ProtonEstimate estimat
 
         if (value != 0)
         {
-            estimate.Add(value, Positions[level] + "-" + SubstituentLabels.Of(kind));
+            estimate.Add(value, PositionPrefixes[level], SubstituentLabels.Of(kind));
         }
     }
 
@@ -59,7 +59,7 @@ internal struct IncrementTally(PredictionContext context, ProtonEstimate estimat
         if (row is null)
         {
             ApproximateRows += level == 1 ? 0.5 : 0.15;
-            estimate.Note("no increment row for " + Positions[level] + "-" + SubstituentLabels.Of(kind));
+            estimate.Note("no increment row for " + PositionPrefixes[level] + SubstituentLabels.Of(kind));
         }
         else if (level == 1)
         {

@@ -41,7 +41,7 @@ internal static class AromaticShifts
         var estimate = new ProtonEstimate().Start(BenzeneIncrements.Base, "benzene base (Pretsch increments)");
         var outcome = RingSubstituents.Apply(context, ring, index, estimate);
         estimate.Widen(0.20, "increment error");
-        if (outcome.Count > 0) estimate.Widen(0.06 * outcome.Count, $"{outcome.Count} substituents");
+        if (outcome.Count > 0) estimate.Widen(0.06 * outcome.Count, outcome.Count, "substituents");
         if (outcome.Uncertainty > 0) estimate.Widen(outcome.Uncertainty, "approximate rows or crowding");
         ApplySolvent(estimate, solvent, heteroaromatic: false);
         return estimate.Finish(ShiftBasis.Increments);
@@ -49,7 +49,7 @@ internal static class AromaticShifts
 
     private static ShiftPrediction FromParent(PredictionContext context, ImmutableArray<int> ring, int index, ParentPosition parent, string? solvent)
     {
-        var estimate = new ProtonEstimate().Start(parent.Ppm, parent.Parent + " ring position" + (parent.Source == 'M' ? " (from memory)" : " (Pretsch)"));
+        var estimate = new ProtonEstimate().Start(parent.Ppm, parent.Parent, parent.Source == 'M' ? " ring position (from memory)" : " ring position (Pretsch)");
         var outcome = RingSubstituents.Apply(context, ring, index, estimate);
         estimate.Widen(parent.HalfWidth, "parent value");
         if (outcome.Count > 0) estimate.Widen(0.08 * outcome.Count + 0.25 * outcome.SumAbsolute, "benzene increments transferred");
@@ -59,10 +59,15 @@ internal static class AromaticShifts
         return estimate.Finish(outcome.Count > 0 ? ShiftBasis.Increments : ShiftBasis.TabulatedEnvironment);
     }
 
+    private const double HeteroaromaticUp = 0.3;
+    private const double BenzenoidUp = 0.2;
+    private static readonly string HeteroaromaticStretch = ": −0.10/" + Ppm.Signed(HeteroaromaticUp) + " against CDCl3 data";
+    private static readonly string BenzenoidStretch = ": −0.10/" + Ppm.Signed(BenzenoidUp) + " against CDCl3 data";
+
     /// <summary>Solvent allowance for aromatic protons (C6D6 upfield; polar solvents mostly downfield).</summary>
     internal static void ApplySolvent(ProtonEstimate estimate, string? solvent, bool heteroaromatic)
     {
-        var up = heteroaromatic ? 0.3 : 0.2;
+        var up = heteroaromatic ? HeteroaromaticUp : BenzenoidUp;
         switch (solvent)
         {
             case "CDCl3" or "CD2Cl2":
@@ -71,7 +76,7 @@ internal static class AromaticShifts
                 estimate.Stretch(0.4, 0.05, "aromatic solvent: up to −0.40");
                 return;
             default:
-                estimate.Stretch(0.1, up, (solvent ?? "solvent not given") + ": −0.10/" + Ppm.Signed(up) + " against CDCl3 data");
+                estimate.Stretch(0.1, up, solvent ?? "solvent not given", heteroaromatic ? HeteroaromaticStretch : BenzenoidStretch);
                 return;
         }
     }

@@ -55,15 +55,15 @@ internal static class RingSubstituents
     {
         var kind = SubstituentClassifier.Classify(context, ringAtom, substituent);
         var row = BenzeneIncrements.Of(kind, context.Molecule.Atoms[substituent].HydrogenCount);
-        var position = distance switch { 1 => "o", 2 => "m", _ => "p" };
+        var position = distance switch { 1 => "o-", 2 => "m-", _ => "p-" };
         if (row is null)
         {
-            estimate.Note("no ring increment for " + position + "-" + SubstituentLabels.Of(kind));
+            estimate.Note("no ring increment for " + position + SubstituentLabels.Of(kind));
             return (0, 0.3);
         }
 
         var z = row.Value.At(distance);
-        estimate.Add(z, position + "-" + SubstituentLabels.Of(kind));
+        estimate.Add(z, position, SubstituentLabels.Of(kind));
         return (z, row.Value.Uncertainty);
     }
 

@@ -26,7 +26,7 @@ internal static class AlkeneShifts
 
         approximate += AddPartnerSide(context, carbon, partner, sides, estimate);
         estimate.Widen(0.25, "increment error");
-        if (sides.Count > 0) estimate.Widen(0.05 * sides.Count, $"{sides.Count} substituents");
+        if (sides.Count > 0) estimate.Widen(0.05 * sides.Count, sides.Count, "substituents");
         if (approximate > 0) estimate.Widen(approximate, "approximate rows");
         SolventStretch.Apply(estimate, solvent, nearPolarGroup: false);
         return estimate.Finish(ShiftBasis.Increments);
