@@ -12,7 +12,9 @@ namespace ConsistencyHost.Cli.Tests.Deployment;
 /// </summary>
 public sealed class PublishedImageTests
 {
-    private static readonly TimeSpan PublishLimit = TimeSpan.FromSeconds(90);
+    // A hang guard, not a speed target: a Release publish competes with the other test assemblies for the 2 cores
+    // and took 87 s wall (16 s CPU) and up to 3.5 min under that load while being correct, so 90 s failed spuriously.
+    private static readonly TimeSpan PublishLimit = TimeSpan.FromMinutes(6);
 
     [Fact]
     public void Dockerfile_StagesUserAndEntrypoint_AreTheDocumentedOnes()
