@@ -39,15 +39,7 @@ internal sealed class WorkerProcess : IAsyncDisposable
     /// <summary>Starts a worker for one plugin and waits for its handshake; throws <see cref="WorkerStartException"/>.</summary>
     public static async Task<WorkerProcess> StartAsync(IsolationOptions options, string pluginAssembly, CancellationToken cancellationToken)
     {
-        var directory = Directory.CreateTempSubdirectory("ch-worker-").FullName;
-        // CreateTempSubdirectory already makes it 0700 on Unix; set it explicitly, as the socket's only guard
-        // against other users. (Workers are Unix-only: prlimit, unshare and the socket folder's mode.)
-        if (!OperatingSystem.IsWindows())
-        {
-            File.SetUnixFileMode(directory, UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.UserExecute);
-            if (options.WorkerUserId is { } user) FileOwner.Change(directory, user);
-        }
-
+        var directory = CreatePrivateDirectory(options);
         var socket = Path.Combine(directory, "worker.sock");
         var process = Process.Start(WorkerCommand.Build(options, pluginAssembly, directory, socket))
                       ?? throw new WorkerStartException("the worker process could not be started");
@@ -79,6 +71,21 @@ internal sealed class WorkerProcess : IAsyncDisposable
             Kill(process, directory);
             throw error as WorkerStartException ?? new WorkerStartException($"the worker did not start: {error.Message}{stderr.Describe()}");
         }
+    }
+
+    /// <summary>A fresh 0700 folder owned by the worker's user: its working, home and temporary folder.</summary>
+    internal static string CreatePrivateDirectory(IsolationOptions options)
+    {
+        var directory = Directory.CreateTempSubdirectory("ch-worker-").FullName;
+        // CreateTempSubdirectory already makes it 0700 on Unix; set it explicitly, as the socket's only guard
+        // against other users. (Workers are Unix-only: prlimit, unshare and the socket folder's mode.)
+        if (!OperatingSystem.IsWindows())
+        {
+            File.SetUnixFileMode(directory, UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.UserExecute);
+            if (options.WorkerUserId is { } user) FileOwner.Change(directory, user);
+        }
+
+        return directory;
     }
 
     /// <summary>Waits up to <paramref name="limit"/> for the process to exit; its exit description, or null if it lives on.</summary>
@@ -140,7 +147,8 @@ internal sealed class WorkerProcess : IAsyncDisposable
         return GrpcChannel.ForAddress("http://worker", new GrpcChannelOptions { HttpHandler = handler, MaxReceiveMessageSize = 16 * 1024 * 1024 });
     }
 
-    private static void Kill(Process process, string directory)
+    /// <summary>Kills the process tree (if it still runs) and removes its private folder.</summary>
+    internal static void Kill(Process process, string directory)
     {
         try
         {

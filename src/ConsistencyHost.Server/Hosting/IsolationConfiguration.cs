@@ -8,11 +8,12 @@ namespace ConsistencyHost.Server.Hosting;
 /// Reads the "ConsistencyHost:Isolation" section and builds the worker executor for untrusted plugins.
 /// </summary>
 /// <example>
-/// <code>"Isolation": { "Enabled": true, "CrashLimit": 3, "CrashWindowMinutes": 5, "ManagedHeapMegabytes": 256, "IsolateNetwork": true }</code>
+/// <code>"Isolation": { "Enabled": true, "CrashLimit": 3, "CrashWindowMinutes": 5, "ManagedHeapMegabytes": 256, "IsolateNetwork": true,
+/// "CompileTimeoutSeconds": 60, "CompileHeapMegabytes": 768 }</code>
 /// </example>
 public static class IsolationConfiguration
 {
-    private static readonly string[] Keys = ["Enabled", "CrashLimit", "CrashWindowMinutes", "ManagedHeapMegabytes", "IsolateNetwork", "WorkerPath"];
+    private static readonly string[] Keys = ["Enabled", "CrashLimit", "CrashWindowMinutes", "ManagedHeapMegabytes", "IsolateNetwork", "WorkerPath", "CompileTimeoutSeconds", "CompileHeapMegabytes"];
 
     /// <summary>
     /// The executor, or null when "Enabled" is false (every rule then runs in-process, as in the engine's
@@ -33,6 +34,8 @@ public static class IsolationConfiguration
             CrashLimit = Read(section, "CrashLimit", defaults.CrashLimit, v => v is >= 1 and <= 1000, problems),
             CrashWindow = TimeSpan.FromMinutes(Read(section, "CrashWindowMinutes", defaults.CrashWindow.TotalMinutes, v => v is > 0 and <= 1440, problems)),
             ManagedHeapBytes = Read(section, "ManagedHeapMegabytes", defaults.ManagedHeapBytes / (1024 * 1024), v => v is >= 32 and <= 65536, problems) * 1024 * 1024,
+            CompileTimeout = TimeSpan.FromSeconds(Read(section, "CompileTimeoutSeconds", defaults.CompileTimeout.TotalSeconds, v => v is >= 1 and <= 3600, problems)),
+            CompileHeapBytes = Read(section, "CompileHeapMegabytes", defaults.CompileHeapBytes / (1024 * 1024), v => v is >= 128 and <= 65536, problems) * 1024 * 1024,
             IsolateNetwork = Read(section, "IsolateNetwork", defaults.IsolateNetwork, _ => true, problems),
             WorkerAssemblyPath = section["WorkerPath"] is { Length: > 0 } path ? Path.GetFullPath(path) : defaults.WorkerAssemblyPath,
         };
