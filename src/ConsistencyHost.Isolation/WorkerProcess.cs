@@ -69,9 +69,18 @@ internal sealed class WorkerProcess : IAsyncDisposable
         catch (Exception error) when (error is TimeoutException or IOException or RpcException or WorkerStartException)
         {
             Kill(process, directory);
-            throw error as WorkerStartException ?? new WorkerStartException($"the worker did not start: {error.Message}{stderr.Describe()}");
+            throw error as WorkerStartException ?? new WorkerStartException(StartFailure(error, options.StartTimeout) + stderr.Describe());
         }
     }
+
+    /// <summary>Names the step that failed and, for a time-out, the limit that ended it.</summary>
+    private static string StartFailure(Exception error, TimeSpan limit) => error switch
+    {
+        TimeoutException => $"the worker did not print its handshake line within the start limit of {limit.TotalSeconds:0.###} s (loading .NET, Kestrel and its plugin); it was killed",
+        RpcException { StatusCode: StatusCode.DeadlineExceeded } =>
+            $"the worker did not answer its health check within the start limit of {limit.TotalSeconds:0.###} s; it was killed",
+        _ => $"the worker did not start: {error.Message}",
+    };
 
     /// <summary>A fresh 0700 folder owned by the worker's user: its working, home and temporary folder.</summary>
     internal static string CreatePrivateDirectory(IsolationOptions options)
@@ -88,8 +97,8 @@ internal sealed class WorkerProcess : IAsyncDisposable
         return directory;
     }
 
-    /// <summary>Waits up to <paramref name="limit"/> for the process to exit; its exit description, or null if it lives on.</summary>
-    public async Task<string?> ExitDescriptionAsync(TimeSpan limit)
+    /// <summary>Waits up to <paramref name="limit"/> for the process to exit; how it ended, or null if it lives on.</summary>
+    public async Task<WorkerExit?> ExitAsync(TimeSpan limit)
     {
         try
         {
@@ -102,7 +111,7 @@ internal sealed class WorkerProcess : IAsyncDisposable
 
         // Give the stderr reader a moment to drain what the runtime printed as it died (e.g. "Stack overflow.").
         await _stderr.DrainedAsync(TimeSpan.FromSeconds(2));
-        return $"worker exited with code {_process.ExitCode}{_stderr.Describe()}";
+        return new WorkerExit(ExitStatus.WasKilled(_process.ExitCode), $"worker {ExitStatus.Describe(_process.ExitCode)}{_stderr.Describe()}");
     }
 
     public ValueTask DisposeAsync()
@@ -169,6 +178,14 @@ internal sealed class WorkerProcess : IAsyncDisposable
             // A socket file still being unlinked; the OS cleans the temporary folder later.
         }
     }
+}
+
+/// <summary>How a worker process ended.</summary>
+/// <param name="KilledFromOutside">Ended by SIGKILL that the host did not send: not the plugin's doing.</param>
+/// <param name="Description">"worker exited with code 3; last stderr: …", "worker was killed by signal 9 (SIGKILL) …".</param>
+internal sealed record WorkerExit(bool KilledFromOutside, string Description)
+{
+    public override string ToString() => Description;
 }
 
 /// <summary>A worker could not be started or did not complete its handshake.</summary>

@@ -24,7 +24,7 @@ public static class IsolationConfiguration
         var problems = new List<string>();
         foreach (var child in section.GetChildren().Where(c => !Keys.Contains(c.Key, StringComparer.OrdinalIgnoreCase)))
         {
-            problems.Add($"{child.Path}: unknown key '{child.Key}'; expected one of {string.Join(", ", Keys)}");
+            problems.Add($"{child.Path}: unknown key {ConfiguredValue.Quote(child.Key)}; expected one of {string.Join(", ", Keys)}");
         }
 
         var defaults = new IsolationOptions();
@@ -39,7 +39,7 @@ public static class IsolationConfiguration
             IsolateNetwork = Read(section, "IsolateNetwork", defaults.IsolateNetwork, _ => true, problems),
             WorkerAssemblyPath = section["WorkerPath"] is { Length: > 0 } path ? Path.GetFullPath(path) : defaults.WorkerAssemblyPath,
         };
-        if (problems.Count > 0) throw new ProfileConfigurationException(problems);
+        if (problems.Count > 0) throw new ProfileConfigurationException(problems, ProfileConfigurationException.HostTitle);
         if (!enabled) return null;
         try
         {
@@ -47,7 +47,7 @@ public static class IsolationConfiguration
         }
         catch (FileNotFoundException error)
         {
-            throw new ProfileConfigurationException([$"{section.Path}: {error.Message}"]);
+            throw new ProfileConfigurationException([$"{section.Path}: {error.Message}"], ProfileConfigurationException.HostTitle);
         }
     }
 
@@ -64,7 +64,7 @@ public static class IsolationConfiguration
             // Reported below with the key's path.
         }
 
-        problems.Add($"{section.Path}:{key}: '{text}' is not a valid {typeof(T).Name} here");
+        problems.Add($"{section.Path}:{key}: {ConfiguredValue.Quote(text)} is not a valid {typeof(T).Name} here");
         return fallback;
     }
 }
