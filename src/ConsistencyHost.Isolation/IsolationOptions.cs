@@ -35,6 +35,19 @@ public sealed record IsolationOptions
     /// </summary>
     public long AddressSpaceBytes { get; init; } = 8L * 1024 * 1024 * 1024;
 
+    /// <summary>
+    /// Wall time a worker may take to compile one source plugin (start, Roslyn, analyzers, emit); past it the
+    /// compiler process is killed and the plugin refused. A lab's plugin takes a few seconds in a fresh process
+    /// (most of it loading Roslyn); a minute covers a loaded, shared machine and stops nested-lambda blow-ups.
+    /// </summary>
+    public TimeSpan CompileTimeout { get; init; } = TimeSpan.FromSeconds(60);
+
+    /// <summary>
+    /// Managed heap limit of a compiling worker. Roslyn with the .NET reference assemblies needs more than a rule
+    /// does; a constant string doubled past the metadata limit needs gigabytes and is stopped here.
+    /// </summary>
+    public long CompileHeapBytes { get; init; } = 768L * 1024 * 1024;
+
     /// <summary>Open file descriptors a worker may hold (RLIMIT_NOFILE); Kestrel and the runtime need a few dozen.</summary>
     public int OpenFiles { get; init; } = 256;
 

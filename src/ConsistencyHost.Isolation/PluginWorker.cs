@@ -64,7 +64,7 @@ internal sealed class PluginWorker(string pluginAssembly, IsolationOptions optio
             }
             catch (RpcException error)
             {
-                var exit = await worker.ExitDescriptionAsync(TimeSpan.FromSeconds(5));
+                var exit = await worker.ExitAsync(TimeSpan.FromSeconds(5));
                 await StopWorkerAsync();
                 throw new WorkerStartException(exit is not null ? $"its worker died while describing it: {exit}"
                     : error.StatusCode == StatusCode.DeadlineExceeded ? $"its worker did not describe it within {options.DescribeTimeout.TotalSeconds:0} s; the worker was killed"
@@ -123,8 +123,10 @@ internal sealed class PluginWorker(string pluginAssembly, IsolationOptions optio
         }
         catch (RpcException error) when (!cancellationToken.IsCancellationRequested)
         {
-            var exit = await worker.ExitDescriptionAsync(TimeSpan.FromSeconds(5));
-            return exit is not null
+            var exit = await worker.ExitAsync(TimeSpan.FromSeconds(5));
+            return exit is { KilledFromOutside: true }
+                ? await KilledFromOutsideAsync(exit)
+                : exit is not null
                 ? await LoseAsync(RuleRunStatus.Crashed, $"its worker died during the run: {exit}")
                 : await LoseAsync(RuleRunStatus.Failed, $"the worker call failed ({error.StatusCode}: {error.Status.Detail}); the worker was restarted");
         }
@@ -141,6 +143,18 @@ internal sealed class PluginWorker(string pluginAssembly, IsolationOptions optio
         ledger.Record(pluginAssembly, message);
         WorkerTelemetry.Restarted(pluginAssembly);
         return Result(status, message);
+    }
+
+    /// <summary>
+    /// The worker was killed by a signal the host did not send (another process, or the kernel's out-of-memory
+    /// killer): the run is lost, but the plugin is not blamed — the loss is not counted toward its quarantine, so
+    /// another process cannot get a victim plugin quarantined by killing its workers. Restarted on next use.
+    /// </summary>
+    private async Task<ExecutorResult> KilledFromOutsideAsync(WorkerExit exit)
+    {
+        await StopWorkerAsync();
+        WorkerTelemetry.Restarted(pluginAssembly);
+        return Result(RuleRunStatus.Crashed, $"its {exit} during the run; not counted against the plugin");
     }
 
     private static ExecutorResult Result(RuleRunStatus status, string message, IReadOnlyList<Sdk.Findings.Finding>? findings = null) =>

@@ -16,7 +16,12 @@ internal static class WorkerCommand
     /// <summary>util-linux setpriv: drops to another user and sets no_new_privs before exec.</summary>
     public const string Setpriv = "/usr/bin/setpriv";
 
-    public static ProcessStartInfo Build(IsolationOptions options, string pluginAssembly, string privateDirectory, string socketPath)
+    /// <summary>A rule worker serving one plugin on a Unix socket.</summary>
+    public static ProcessStartInfo Build(IsolationOptions options, string pluginAssembly, string privateDirectory, string socketPath) =>
+        Build(options, ["--plugin", pluginAssembly, "--socket", socketPath], privateDirectory, options.ManagedHeapBytes);
+
+    /// <summary>The worker program with <paramref name="workerArguments"/>, under every limit and confinement available here.</summary>
+    public static ProcessStartInfo Build(IsolationOptions options, IReadOnlyList<string> workerArguments, string privateDirectory, long managedHeapBytes)
     {
         var start = new ProcessStartInfo
         {
@@ -42,15 +47,15 @@ internal static class WorkerCommand
             command.AddRange([Setpriv, $"--reuid={user}", $"--regid={user}", "--clear-groups", "--no-new-privs"]);
         }
 
-        command.AddRange([DotnetMuxer.Path, options.WorkerAssemblyPath, "--plugin", pluginAssembly, "--socket", socketPath]);
+        command.AddRange([DotnetMuxer.Path, options.WorkerAssemblyPath, .. workerArguments]);
         start.FileName = command[0];
         foreach (var argument in command.Skip(1)) start.ArgumentList.Add(argument);
-        SetEnvironment(start, options, privateDirectory);
+        SetEnvironment(start, privateDirectory, managedHeapBytes);
         return start;
     }
 
     /// <summary>Nothing of the host's environment (API keys, connection strings) reaches the plugin.</summary>
-    private static void SetEnvironment(ProcessStartInfo start, IsolationOptions options, string privateDirectory)
+    private static void SetEnvironment(ProcessStartInfo start, string privateDirectory, long managedHeapBytes)
     {
         var dotnetRoot = Environment.GetEnvironmentVariable("DOTNET_ROOT");
         start.Environment.Clear();
@@ -58,7 +63,7 @@ internal static class WorkerCommand
         start.Environment["HOME"] = privateDirectory;
         start.Environment["TMPDIR"] = privateDirectory;
         if (!string.IsNullOrEmpty(dotnetRoot)) start.Environment["DOTNET_ROOT"] = dotnetRoot;
-        start.Environment["DOTNET_GCHeapHardLimit"] = options.ManagedHeapBytes.ToString("X", CultureInfo.InvariantCulture);
+        start.Environment["DOTNET_GCHeapHardLimit"] = managedHeapBytes.ToString("X", CultureInfo.InvariantCulture);
         // No debugger, profiler or EventPipe endpoint: nothing else can attach to the worker through the runtime.
         start.Environment["DOTNET_EnableDiagnostics"] = "0";
         start.Environment["DOTNET_gcServer"] = "0";

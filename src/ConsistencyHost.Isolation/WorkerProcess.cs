@@ -39,15 +39,7 @@ internal sealed class WorkerProcess : IAsyncDisposable
     /// <summary>Starts a worker for one plugin and waits for its handshake; throws <see cref="WorkerStartException"/>.</summary>
     public static async Task<WorkerProcess> StartAsync(IsolationOptions options, string pluginAssembly, CancellationToken cancellationToken)
     {
-        var directory = Directory.CreateTempSubdirectory("ch-worker-").FullName;
-        // CreateTempSubdirectory already makes it 0700 on Unix; set it explicitly, as the socket's only guard
-        // against other users. (Workers are Unix-only: prlimit, unshare and the socket folder's mode.)
-        if (!OperatingSystem.IsWindows())
-        {
-            File.SetUnixFileMode(directory, UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.UserExecute);
-            if (options.WorkerUserId is { } user) FileOwner.Change(directory, user);
-        }
-
+        var directory = CreatePrivateDirectory(options);
         var socket = Path.Combine(directory, "worker.sock");
         var process = Process.Start(WorkerCommand.Build(options, pluginAssembly, directory, socket))
                       ?? throw new WorkerStartException("the worker process could not be started");
@@ -77,12 +69,36 @@ internal sealed class WorkerProcess : IAsyncDisposable
         catch (Exception error) when (error is TimeoutException or IOException or RpcException or WorkerStartException)
         {
             Kill(process, directory);
-            throw error as WorkerStartException ?? new WorkerStartException($"the worker did not start: {error.Message}{stderr.Describe()}");
+            throw error as WorkerStartException ?? new WorkerStartException(StartFailure(error, options.StartTimeout) + stderr.Describe());
         }
     }
 
-    /// <summary>Waits up to <paramref name="limit"/> for the process to exit; its exit description, or null if it lives on.</summary>
-    public async Task<string?> ExitDescriptionAsync(TimeSpan limit)
+    /// <summary>Names the step that failed and, for a time-out, the limit that ended it.</summary>
+    private static string StartFailure(Exception error, TimeSpan limit) => error switch
+    {
+        TimeoutException => $"the worker did not print its handshake line within the start limit of {limit.TotalSeconds:0.###} s (loading .NET, Kestrel and its plugin); it was killed",
+        RpcException { StatusCode: StatusCode.DeadlineExceeded } =>
+            $"the worker did not answer its health check within the start limit of {limit.TotalSeconds:0.###} s; it was killed",
+        _ => $"the worker did not start: {error.Message}",
+    };
+
+    /// <summary>A fresh 0700 folder owned by the worker's user: its working, home and temporary folder.</summary>
+    internal static string CreatePrivateDirectory(IsolationOptions options)
+    {
+        var directory = Directory.CreateTempSubdirectory("ch-worker-").FullName;
+        // CreateTempSubdirectory already makes it 0700 on Unix; set it explicitly, as the socket's only guard
+        // against other users. (Workers are Unix-only: prlimit, unshare and the socket folder's mode.)
+        if (!OperatingSystem.IsWindows())
+        {
+            File.SetUnixFileMode(directory, UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.UserExecute);
+            if (options.WorkerUserId is { } user) FileOwner.Change(directory, user);
+        }
+
+        return directory;
+    }
+
+    /// <summary>Waits up to <paramref name="limit"/> for the process to exit; how it ended, or null if it lives on.</summary>
+    public async Task<WorkerExit?> ExitAsync(TimeSpan limit)
     {
         try
         {
@@ -95,7 +111,7 @@ internal sealed class WorkerProcess : IAsyncDisposable
 
         // Give the stderr reader a moment to drain what the runtime printed as it died (e.g. "Stack overflow.").
         await _stderr.DrainedAsync(TimeSpan.FromSeconds(2));
-        return $"worker exited with code {_process.ExitCode}{_stderr.Describe()}";
+        return new WorkerExit(ExitStatus.WasKilled(_process.ExitCode), $"worker {ExitStatus.Describe(_process.ExitCode)}{_stderr.Describe()}");
     }
 
     public ValueTask DisposeAsync()
@@ -140,7 +156,8 @@ internal sealed class WorkerProcess : IAsyncDisposable
         return GrpcChannel.ForAddress("http://worker", new GrpcChannelOptions { HttpHandler = handler, MaxReceiveMessageSize = 16 * 1024 * 1024 });
     }
 
-    private static void Kill(Process process, string directory)
+    /// <summary>Kills the process tree (if it still runs) and removes its private folder.</summary>
+    internal static void Kill(Process process, string directory)
     {
         try
         {
@@ -161,6 +178,14 @@ internal sealed class WorkerProcess : IAsyncDisposable
             // A socket file still being unlinked; the OS cleans the temporary folder later.
         }
     }
+}
+
+/// <summary>How a worker process ended.</summary>
+/// <param name="KilledFromOutside">Ended by SIGKILL that the host did not send: not the plugin's doing.</param>
+/// <param name="Description">"worker exited with code 3; last stderr: …", "worker was killed by signal 9 (SIGKILL) …".</param>
+internal sealed record WorkerExit(bool KilledFromOutside, string Description)
+{
+    public override string ToString() => Description;
 }
 
 /// <summary>A worker could not be started or did not complete its handshake.</summary>

@@ -4,6 +4,7 @@ using ConsistencyHost.Engine.Intake;
 using ConsistencyHost.Engine.Plugins;
 using ConsistencyHost.Engine.Profiles;
 using ConsistencyHost.Engine.Running;
+using ConsistencyHost.Engine.Vetting;
 
 namespace ConsistencyHost.Isolation;
 
@@ -17,12 +18,14 @@ public sealed class WorkerRuleExecutor : IRuleExecutor, IAsyncDisposable, IDispo
     private readonly IsolationOptions _options;
     private readonly CrashLedger _ledger;
     private readonly ConcurrentDictionary<string, PluginWorker> _workers = new(StringComparer.Ordinal);
+    private readonly WorkerSourceCompiler _compiler;
 
     /// <summary>Creates the executor; workers start on first use.</summary>
     public WorkerRuleExecutor(IsolationOptions? options = null)
     {
         _options = options ?? new IsolationOptions();
         _ledger = new CrashLedger(_options);
+        _compiler = new WorkerSourceCompiler(_options);
         if (!File.Exists(_options.WorkerAssemblyPath))
         {
             throw new FileNotFoundException($"the rule worker is not at '{_options.WorkerAssemblyPath}'; build src/ConsistencyHost.Worker", _options.WorkerAssemblyPath);
@@ -56,6 +59,10 @@ public sealed class WorkerRuleExecutor : IRuleExecutor, IAsyncDisposable, IDispo
             return [WorkerDescriptions.Refused(plugin, $"could not be described by its worker: {error.Message}")];
         }
     }
+
+    /// <inheritdoc />
+    /// <remarks>A one-shot worker process per source plugin, with <see cref="IsolationOptions.CompileTimeout"/> and <see cref="IsolationOptions.CompileHeapBytes"/>.</remarks>
+    public ISourceCompilation SourceCompilation => _compiler;
 
     /// <inheritdoc />
     public string? HeldBackReason(RuleDescriptor rule) => _ledger.QuarantineReason(rule.AssemblyPath);

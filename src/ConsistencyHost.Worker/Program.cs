@@ -1,7 +1,12 @@
 using ConsistencyHost.Worker;
 
 // The rule worker. Started only by the host (see ConsistencyHost.Isolation.WorkerLauncher); run by hand it
-// waits for a secret on standard input and is of no use.
+// waits for a secret on standard input and is of no use. With --compile NAME it compiles one source plugin and exits.
+if (args is [SourceCompileMode.Flag, var assemblyName])
+{
+    return await SourceCompileMode.RunAsync(assemblyName);
+}
+
 var arguments = WorkerArguments.Parse(args);
 if (arguments.Problem is not null)
 {

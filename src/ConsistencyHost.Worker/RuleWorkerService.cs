@@ -26,23 +26,25 @@ internal sealed class RuleWorkerService(LoadedPlugin plugin) : RuleWorker.RuleWo
             return Task.FromResult(Failed($"this worker has no rule '{request.RuleId}'{(plugin.Refusal.Length > 0 ? ": " + plugin.Refusal : "")}"));
         }
 
+        using var deadline = CancellationTokenSource.CreateLinkedTokenSource(context.CancellationToken);
         try
         {
-            return Task.FromResult(Run(rule, request, context.CancellationToken));
+            return Task.FromResult(Run(rule, request, deadline));
         }
-        catch (OperationCanceledException) when (!context.CancellationToken.IsCancellationRequested)
+        catch (OperationCanceledException) when (deadline.IsCancellationRequested && !context.CancellationToken.IsCancellationRequested)
         {
-            // Only the deadline source is left to have fired: the rule observed its token and stopped.
+            // The deadline fired and the rule observed its token and stopped.
             return Task.FromResult(new RunRuleResponse { Ok = false, TimedOut = true, Message = $"stopped at its deadline of {request.DeadlineMs} ms" });
         }
         catch (Exception error) when (error is not OperationCanceledException || !context.CancellationToken.IsCancellationRequested)
         {
-            // Any exception is the rule's failure, reported as data; the worker itself carries on.
+            // Any exception is the rule's failure, reported as data; the worker itself carries on. That includes an
+            // OperationCanceledException the rule threw of its own accord before its deadline: not a time-out.
             return Task.FromResult(Failed($"{error.GetType().Name}: {error.Message}"));
         }
     }
 
-    private RunRuleResponse Run(RuleDescriptor rule, RunRuleRequest request, CancellationToken callToken)
+    private RunRuleResponse Run(RuleDescriptor rule, RunRuleRequest request, CancellationTokenSource deadline)
     {
         // Read leniently: the host has already refused the entry if it asked for strict reading, and a lenient read
         // of text that reads strictly gives the same entry.
@@ -51,7 +53,6 @@ internal sealed class RuleWorkerService(LoadedPlugin plugin) : RuleWorker.RuleWo
                       ?? throw new JsonException($"options for '{rule.Id}' deserialised to null");
         // As in the host: the perception every rule shares is not this rule's work, so it is done before its clock starts.
         SharedPerception.Prepare(entry);
-        using var deadline = CancellationTokenSource.CreateLinkedTokenSource(callToken);
         deadline.CancelAfter(TimeSpan.FromMilliseconds(Math.Max(1, request.DeadlineMs)));
         var response = new RunRuleResponse { Ok = true };
         foreach (var finding in rule.Factory!().Check(entry, options, deadline.Token))

@@ -33,7 +33,8 @@ public static class PluginDiscovery
 
         var candidates = Candidates(pluginsPath).ToList();
         PluginFolderSafety.Demand(pluginsPath, candidates.Select(c => c.Root));
-        var compiler = new SourcePluginCompiler(sourceCacheRoot ?? SourcePluginCompiler.DefaultCacheRoot);
+        // With workers on, source plugins compile in a worker process with time and memory limits (ISourceCompilation).
+        var compiler = new SourcePluginCompiler(sourceCacheRoot ?? SourcePluginCompiler.DefaultCacheRoot, untrusted?.SourceCompilation);
         var found = new List<RuleDescriptor>();
         var described = new List<Task<IReadOnlyList<RuleDescriptor>>>();
         foreach (var candidate in candidates)
@@ -87,12 +88,6 @@ public static class PluginDiscovery
         }
     }
 
-    /// <summary>
-    /// Compiling hostile source can take unbounded time; a lab's plugin compiles in well under a second once
-    /// Roslyn is warm (about five seconds for the first one in a process), so two minutes only stops a runaway.
-    /// </summary>
-    private static readonly TimeSpan SourceCompileLimit = TimeSpan.FromMinutes(2);
-
     /// <summary>A plugin that passed vetting (not yet loaded anywhere), or its refusal.</summary>
     private sealed record VettedPlugin(string AssemblyPath, string Plugin, RuleDescriptor? Refusal);
 
@@ -100,17 +95,13 @@ public static class PluginDiscovery
     {
         var name = Path.GetFileName(folder);
         var plugin = name + SourceSuffix;
-        using var limit = new CancellationTokenSource(SourceCompileLimit);
         SourcePluginResult result;
         try
         {
-            result = compiler.Compile(folder, limit.Token);
+            // The compilation's own limits (time, and memory in a worker) turn an overrun into a refusal with its reason.
+            result = compiler.Compile(folder);
         }
-        catch (OperationCanceledException) when (limit.IsCancellationRequested)
-        {
-            return new("", plugin, Refused(plugin, $"refused by source vetting: compiling took longer than {SourceCompileLimit.TotalSeconds:0} s", name));
-        }
-        catch (IOException exception)
+        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
         {
             return new("", plugin, Refused(plugin, $"could not be read: {exception.Message}", name));
         }

@@ -16,6 +16,9 @@ public sealed class UntrustedPlugins(Func<string, bool> isTrusted, IRuleExecutor
     /// <summary>Workers started at once; each start is a .NET process start, mostly CPU.</summary>
     private readonly SemaphoreSlim _starts = new(Math.Max(2, Environment.ProcessorCount));
 
+    /// <summary>Where source plugins compile: the executor's bounded place (a worker process), or null for in-process.</summary>
+    internal Vetting.ISourceCompilation? SourceCompilation => executor.SourceCompilation;
+
     /// <summary>True when the plugin loads in the host; a source plugin never does.</summary>
     internal bool IsTrusted(string plugin) => !PluginDiscovery.IsSourcePlugin(plugin) && isTrusted(PluginDiscovery.PluginName(plugin));
 

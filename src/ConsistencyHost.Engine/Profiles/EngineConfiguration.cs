@@ -52,7 +52,7 @@ public static class EngineConfiguration
         {
             if (section[key] is not { } text) return fallback;
             if (int.TryParse(text, NumberStyles.None, CultureInfo.InvariantCulture, out var value) && value > 0) return value;
-            problems.Add($"{section.Path}:{key}: '{Running.ReportLimits.Cut(text, 40)}' is not a positive whole number");
+            problems.Add($"{section.Path}:{key}: {ConfiguredValue.Quote(text)} is not a positive whole number");
             return fallback;
         }
 
@@ -105,7 +105,7 @@ public static class EngineConfiguration
             }
             else
             {
-                problems.Add($"{child.Path}: '{child.Value}' is not a severity; expected info, warning or error");
+                problems.Add($"{child.Path}: {ConfiguredValue.Quote(child.Value)} is not a severity; expected info, warning or error");
             }
         }
 
@@ -116,7 +116,7 @@ public static class EngineConfiguration
     {
         foreach (var child in section.GetChildren().Where(c => !known.Contains(c.Key, StringComparer.OrdinalIgnoreCase)))
         {
-            problems.Add($"{child.Path}: unknown key '{child.Key}'; expected one of {string.Join(", ", known)}");
+            problems.Add($"{child.Path}: unknown key {ConfiguredValue.Quote(child.Key)}; expected one of {string.Join(", ", known)}");
         }
     }
 
@@ -125,7 +125,7 @@ public static class EngineConfiguration
         var text = section[key];
         if (text is null) return null;
         if (bool.TryParse(text, out var value)) return value;
-        problems.Add($"{section.Path}:{key}: '{text}' is not true or false");
+        problems.Add($"{section.Path}:{key}: {ConfiguredValue.Quote(text)} is not true or false");
         return null;
     }
 
@@ -138,7 +138,7 @@ public static class EngineConfiguration
             return TimeSpan.FromMilliseconds(ms);
         }
 
-        problems.Add($"{section.Path}:{key}: '{text}' must be a whole number of milliseconds from 1 to 600000");
+        problems.Add($"{section.Path}:{key}: {ConfiguredValue.Quote(text)} must be a whole number of milliseconds from 1 to 600000");
         return null;
     }
 }

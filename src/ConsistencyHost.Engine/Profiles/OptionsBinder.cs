@@ -20,13 +20,13 @@ internal static class OptionsBinder
             var property = FindProperty(optionsType, name);
             if (property is null)
             {
-                problems.Add($"has no option '{name}'; known options: {KnownOptions(optionsType)}");
+                problems.Add($"has no option {ConfiguredValue.Quote(name)}; known options: {KnownOptions(optionsType)}");
                 continue;
             }
 
             if (!TryConvert(text, property.PropertyType, out var value))
             {
-                problems.Add($"option '{property.Name}' expects {Describe(property.PropertyType)} but got '{text}'");
+                problems.Add($"option '{property.Name}' expects {Describe(property.PropertyType)} but got {ConfiguredValue.Quote(text)}");
                 continue;
             }
 

@@ -21,7 +21,7 @@ public static class ProfileResolver
 
         if (!resolved.ContainsKey(options.DefaultProfile))
         {
-            problems.Add($"default profile '{options.DefaultProfile}' is not defined; defined profiles: {string.Join(", ", resolved.Keys.Order(StringComparer.Ordinal))}");
+            problems.Add($"default profile {ConfiguredValue.Quote(options.DefaultProfile)} is not defined; defined profiles: {string.Join(", ", resolved.Keys.Order(StringComparer.Ordinal))}");
         }
 
         return problems.Count == 0 ? resolved : throw new ProfileConfigurationException(problems);
@@ -36,7 +36,7 @@ public static class ProfileResolver
         var known = rules.Select(r => r.Id).ToHashSet(StringComparer.Ordinal);
         foreach (var id in profile.Rules.Keys.Where(id => !known.Contains(id)).Order(StringComparer.Ordinal))
         {
-            problems.Add($"profile '{profile.Name}': unknown rule id '{id}'; loaded rules: {string.Join(", ", known.Order(StringComparer.Ordinal))}");
+            problems.Add($"profile '{profile.Name}': unknown rule id {ConfiguredValue.Quote(id)}; loaded rules: {string.Join(", ", known.Order(StringComparer.Ordinal))}");
         }
 
         var active = new List<ActiveRule>();
@@ -72,7 +72,7 @@ public static class ProfileResolver
         {
             if (!rule.FindingCodes.Contains(code, StringComparer.Ordinal))
             {
-                yield return $"severity override for unknown finding code '{code}'; the rule's codes: {string.Join(", ", rule.FindingCodes)}";
+                yield return $"severity override for unknown finding code {ConfiguredValue.Quote(code)}; the rule's codes: {string.Join(", ", rule.FindingCodes)}";
             }
         }
     }

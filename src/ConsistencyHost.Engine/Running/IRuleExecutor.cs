@@ -39,6 +39,12 @@ public interface IRuleExecutor
     /// <param name="cancellationToken">Cancelled when the host gives up starting.</param>
     Task<IReadOnlyList<RuleDescriptor>> DescribeAsync(string assemblyPath, string plugin, IReadOnlyList<Profile> profiles, CancellationToken cancellationToken);
 
+    /// <summary>
+    /// Where source plugins are compiled, bounded in time and memory (a worker process); null compiles them in the
+    /// host process, where only the time is bounded. Null by default.
+    /// </summary>
+    Vetting.ISourceCompilation? SourceCompilation => null;
+
     /// <summary>Why the rule is currently held back (its plugin is quarantined), or null when it can run.</summary>
     string? HeldBackReason(RuleDescriptor rule);
 

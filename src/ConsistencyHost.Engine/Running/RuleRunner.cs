@@ -131,8 +131,9 @@ public sealed class RuleRunner(IRuleExecutor? isolated = null, ReportLimits? lim
         {
             // Fall through to the timed-out record below.
         }
-        catch (Exception error) when (error is not (OutOfMemoryException or OperationCanceledException))
+        catch (Exception error) when (error is not OutOfMemoryException && (error is not OperationCanceledException || !cancellationToken.IsCancellationRequested))
         {
+            // Includes an OperationCanceledException the rule threw of its own accord before its deadline: a failure, not a time-out.
             return (new RuleRunRecord(id, version, RuleRunStatus.Failed, clock.Elapsed, $"{error.GetType().Name}: {error.Message}", 0), []);
         }
 
@@ -186,8 +187,15 @@ public sealed class RuleRunner(IRuleExecutor? isolated = null, ReportLimits? lim
             return (new RuleRunRecord(id, version, RuleRunStatus.TimedOut, elapsed, $"overran its deadline of {rule.Deadline.TotalMilliseconds:0} ms", 0), []);
         }
 
+        if (run.Task!.IsFaulted && run.Task.Exception!.GetBaseException() is OperationCanceledException && deadline.IsCancellationRequested)
+        {
+            // The rule observed its token when the deadline fired (Task.Run with no token reports that as a fault).
+            return (new RuleRunRecord(id, version, RuleRunStatus.TimedOut, elapsed, $"overran its deadline of {rule.Deadline.TotalMilliseconds:0} ms", 0), []);
+        }
+
         if (run.Task!.IsFaulted)
         {
+            // Any other exception, an OperationCanceledException the rule threw of its own accord included, is a failure.
             var error = run.Task.Exception!.GetBaseException();
             return (new RuleRunRecord(id, version, RuleRunStatus.Failed, elapsed, $"{error.GetType().Name}: {error.Message}", 0), []);
         }

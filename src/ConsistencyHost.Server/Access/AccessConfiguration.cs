@@ -39,7 +39,7 @@ public static class AccessConfiguration
             if (!authenticates) problems.Add(AccessMessages.NeedsAuthentication(address.ToString()));
         }
 
-        if (problems.Count > 0) throw new ProfileConfigurationException(problems);
+        if (problems.Count > 0) throw new ProfileConfigurationException(problems, ProfileConfigurationException.HostTitle);
         return new AccessPolicy { ServerCertificate = certificate, ServerChain = chain, ClientAuthorities = authorities, Keys = keys };
     }
 

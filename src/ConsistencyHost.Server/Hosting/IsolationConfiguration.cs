@@ -8,11 +8,12 @@ namespace ConsistencyHost.Server.Hosting;
 /// Reads the "ConsistencyHost:Isolation" section and builds the worker executor for untrusted plugins.
 /// </summary>
 /// <example>
-/// <code>"Isolation": { "Enabled": true, "CrashLimit": 3, "CrashWindowMinutes": 5, "ManagedHeapMegabytes": 256, "IsolateNetwork": true }</code>
+/// <code>"Isolation": { "Enabled": true, "CrashLimit": 3, "CrashWindowMinutes": 5, "ManagedHeapMegabytes": 256, "IsolateNetwork": true,
+/// "CompileTimeoutSeconds": 60, "CompileHeapMegabytes": 768 }</code>
 /// </example>
 public static class IsolationConfiguration
 {
-    private static readonly string[] Keys = ["Enabled", "CrashLimit", "CrashWindowMinutes", "ManagedHeapMegabytes", "IsolateNetwork", "WorkerPath"];
+    private static readonly string[] Keys = ["Enabled", "CrashLimit", "CrashWindowMinutes", "ManagedHeapMegabytes", "IsolateNetwork", "WorkerPath", "CompileTimeoutSeconds", "CompileHeapMegabytes"];
 
     /// <summary>
     /// The executor, or null when "Enabled" is false (every rule then runs in-process, as in the engine's
@@ -23,7 +24,7 @@ public static class IsolationConfiguration
         var problems = new List<string>();
         foreach (var child in section.GetChildren().Where(c => !Keys.Contains(c.Key, StringComparer.OrdinalIgnoreCase)))
         {
-            problems.Add($"{child.Path}: unknown key '{child.Key}'; expected one of {string.Join(", ", Keys)}");
+            problems.Add($"{child.Path}: unknown key {ConfiguredValue.Quote(child.Key)}; expected one of {string.Join(", ", Keys)}");
         }
 
         var defaults = new IsolationOptions();
@@ -33,10 +34,12 @@ public static class IsolationConfiguration
             CrashLimit = Read(section, "CrashLimit", defaults.CrashLimit, v => v is >= 1 and <= 1000, problems),
             CrashWindow = TimeSpan.FromMinutes(Read(section, "CrashWindowMinutes", defaults.CrashWindow.TotalMinutes, v => v is > 0 and <= 1440, problems)),
             ManagedHeapBytes = Read(section, "ManagedHeapMegabytes", defaults.ManagedHeapBytes / (1024 * 1024), v => v is >= 32 and <= 65536, problems) * 1024 * 1024,
+            CompileTimeout = TimeSpan.FromSeconds(Read(section, "CompileTimeoutSeconds", defaults.CompileTimeout.TotalSeconds, v => v is >= 1 and <= 3600, problems)),
+            CompileHeapBytes = Read(section, "CompileHeapMegabytes", defaults.CompileHeapBytes / (1024 * 1024), v => v is >= 128 and <= 65536, problems) * 1024 * 1024,
             IsolateNetwork = Read(section, "IsolateNetwork", defaults.IsolateNetwork, _ => true, problems),
             WorkerAssemblyPath = section["WorkerPath"] is { Length: > 0 } path ? Path.GetFullPath(path) : defaults.WorkerAssemblyPath,
         };
-        if (problems.Count > 0) throw new ProfileConfigurationException(problems);
+        if (problems.Count > 0) throw new ProfileConfigurationException(problems, ProfileConfigurationException.HostTitle);
         if (!enabled) return null;
         try
         {
@@ -44,7 +47,7 @@ public static class IsolationConfiguration
         }
         catch (FileNotFoundException error)
         {
-            throw new ProfileConfigurationException([$"{section.Path}: {error.Message}"]);
+            throw new ProfileConfigurationException([$"{section.Path}: {error.Message}"], ProfileConfigurationException.HostTitle);
         }
     }
 
@@ -61,7 +64,7 @@ public static class IsolationConfiguration
             // Reported below with the key's path.
         }
 
-        problems.Add($"{section.Path}:{key}: '{text}' is not a valid {typeof(T).Name} here");
+        problems.Add($"{section.Path}:{key}: {ConfiguredValue.Quote(text)} is not a valid {typeof(T).Name} here");
         return fallback;
     }
 }

@@ -122,11 +122,25 @@ public static class ServerApp
             InitialData = [new("Logging:LogLevel:Microsoft.AspNetCore", "Warning")],
         });
 
+    /// <summary>An unreadable configuration file (permissions, ownership, missing) is an access error naming the file, not a crash.</summary>
+    private static void AddConfigFile(ConfigurationManager configuration, string path)
+    {
+        try
+        {
+            configuration.AddJsonFile(path, optional: false, reloadOnChange: false);
+        }
+        catch (Exception error) when (error is UnauthorizedAccessException or IOException)
+        {
+            throw new ProfileConfigurationException([$"configuration file '{path}' could not be read: {error.Message}"],
+                error is UnauthorizedAccessException ? ProfileConfigurationException.AccessTitle : ProfileConfigurationException.HostTitle);
+        }
+    }
+
     private static void AddOverrides(ConfigurationManager configuration, ServerLaunch launch)
     {
         if (launch.ConfigFile is not null)
         {
-            configuration.AddJsonFile(Path.GetFullPath(launch.ConfigFile), optional: false, reloadOnChange: false);
+            AddConfigFile(configuration, Path.GetFullPath(launch.ConfigFile));
         }
 
         var overrides = new Dictionary<string, string?>();
@@ -158,13 +172,13 @@ public static class ServerApp
         };
         return options.MaxEntriesInFlightPerStream >= 1
             ? options
-            : throw new ProfileConfigurationException([$"Server:MaxEntriesInFlightPerStream: {options.MaxEntriesInFlightPerStream} is not allowed; expected at least 1 entry per stream"]);
+            : throw new ProfileConfigurationException([$"Server:MaxEntriesInFlightPerStream: {options.MaxEntriesInFlightPerStream} is not allowed; expected at least 1 entry per stream"], ProfileConfigurationException.HostTitle);
     }
 
     // Beyond loopback, AccessConfiguration demands TLS and client authentication.
     private static IPAddress ParseBindAddress(string text) => IPAddress.TryParse(text, out var address)
         ? address
-        : throw new ProfileConfigurationException([$"Server:BindAddress: '{text}' is not an IP address"]);
+        : throw new ProfileConfigurationException([$"Server:BindAddress: {ConfiguredValue.Quote(text)} is not an IP address"], ProfileConfigurationException.HostTitle);
 
     private static void LogEngine(ILogger logger, CheckEngine engine, WorkerRuleExecutor? executor)
     {

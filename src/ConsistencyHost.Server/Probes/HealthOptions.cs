@@ -27,15 +27,15 @@ public sealed record HealthOptions
     {
         var problems = section.GetChildren()
             .Where(child => !Keys.Contains(child.Key, StringComparer.OrdinalIgnoreCase))
-            .Select(child => $"{child.Path}: unknown key '{child.Key}'; expected one of {string.Join(", ", Keys)}")
+            .Select(child => $"{child.Path}: unknown key {ConfiguredValue.Quote(child.Key)}; expected one of {string.Join(", ", Keys)}")
             .ToList();
         var warmUp = false;
         if (section["WarmUpWorkers"] is { } text && !bool.TryParse(text, out warmUp))
         {
-            problems.Add($"{section.Path}:WarmUpWorkers: '{text}' is not true or false");
+            problems.Add($"{section.Path}:WarmUpWorkers: {ConfiguredValue.Quote(text)} is not true or false");
         }
 
-        if (problems.Count > 0) throw new ProfileConfigurationException(problems);
+        if (problems.Count > 0) throw new ProfileConfigurationException(problems, ProfileConfigurationException.HostTitle);
         return new HealthOptions
         {
             RequiredPlugins = section.GetSection("RequiredPlugins").GetChildren()

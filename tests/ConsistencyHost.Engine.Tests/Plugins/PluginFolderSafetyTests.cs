@@ -40,6 +40,10 @@ public sealed class PluginFolderSafetyTests
         Assert.Contains("writable by its group;", problem, StringComparison.Ordinal);
         Assert.Contains($"chmod go-w '{subfolder}'", problem, StringComparison.Ordinal);
         Assert.Contains(problem, error.Message, StringComparison.Ordinal);
+        // A permission problem, not a mistake in the profiles.
+        Assert.Equal(ProfileConfigurationException.AccessTitle, error.Title);
+        Assert.StartsWith(ProfileConfigurationException.AccessTitle + ":", error.Message, StringComparison.Ordinal);
+        Assert.DoesNotContain("profile", error.Message, StringComparison.OrdinalIgnoreCase);
     }
 
     [Fact]

@@ -50,6 +50,26 @@ public sealed class ProfileResolverTests
     }
 
     [Fact]
+    public void Construct_LongOptionValue_IsCutInTheMessage()
+    {
+        using var folder = PluginFolder.With("ConsistencyHost.Rules.SpectrumMetadata");
+        // A value pasted by mistake: 5000 characters where true or false belongs.
+        var pasted = string.Concat(Enumerable.Repeat("0123456789", 500));
+        var options = new EngineOptions
+        {
+            PluginsPath = folder.Path,
+            Profiles = [new Profile { Name = "default", Rules = new Dictionary<string, RuleSettings> { ["spectrum-metadata"] = new() { Options = new Dictionary<string, string> { ["RequireSolvent"] = pasted } } } }],
+        };
+
+        var error = Assert.Throws<ProfileConfigurationException>(() => new CheckEngine(options));
+
+        var problem = Assert.Single(error.Problems);
+        Assert.Contains($"but got '{pasted[..ConfiguredValue.MaxShown]}… (cut, 5000 characters in all)'", problem, StringComparison.Ordinal);
+        Assert.True(problem.Length < 300, problem);
+        Assert.Equal(ProfileConfigurationException.ProfileTitle, error.Title);
+    }
+
+    [Fact]
     public void Construct_SeverityOverrideForMisspeltCode_IsRefusedWithTheRulesCodes()
     {
         using var folder = PluginFolder.With("ConsistencyHost.Rules.SpectrumMetadata");

@@ -51,4 +51,33 @@ public sealed class RuleRunnerTests
         Assert.Equal(RuleRunStatus.Skipped, secondRun.Status);
         Assert.Equal("frequency-not-stated", Assert.Single(second.Findings).Finding.Code);
     }
+
+    [Theory]
+    [InlineData(false)] // untrusted without workers: run on a pool thread beside the others
+    [InlineData(true)] // trusted: run inline on the request's thread
+    public void Check_RuleThatThrowsItsOwnCancellation_IsFailedNotTimedOut(bool trusted)
+    {
+        using var folder = PluginFolder.With("ConsistencyHost.Rules.SpectrumMetadata", "ConsistencyHost.Fixtures.CancellingRule");
+        var engine = new CheckEngine(new EngineOptions
+        {
+            PluginsPath = folder.Path,
+            RuleDeadline = TimeSpan.FromSeconds(30),
+            TrustedPlugins = trusted
+                ? new HashSet<string>(EngineOptions.BuiltInPlugins.Append("ConsistencyHost.Fixtures.CancellingRule"), StringComparer.Ordinal)
+                : EngineOptions.BuiltInPlugins,
+        });
+
+        var first = engine.Check(EngineTestKit.Entry(EngineTestKit.ProtonSpectrum(solvent: null)));
+        var second = engine.Check(EngineTestKit.Entry(EngineTestKit.ProtonSpectrum(mhz: null)));
+
+        foreach (var report in new[] { first, second })
+        {
+            var run = Assert.Single(report.RuleRuns, r => r.RuleId == "fixture-cancels-itself");
+            Assert.Equal(RuleRunStatus.Failed, run.Status);
+            Assert.Equal("OperationCanceledException: the rule cancelled itself on purpose", run.Message);
+        }
+
+        Assert.Equal("solvent-not-stated", Assert.Single(first.Findings).Finding.Code);
+        Assert.Equal("frequency-not-stated", Assert.Single(second.Findings).Finding.Code);
+    }
 }

@@ -62,4 +62,36 @@ public sealed class SourcePluginCompilerTests
         Assert.Equal("CHSDK2001", problem.Code);
         Assert.EndsWith("suppressed in the source but refused by the host", problem.Because);
     }
+
+    [Fact]
+    public void Compile_SourcesOverTheSizeLimit_AreRefusedBeforeCompiling()
+    {
+        using var folder = PluginFolder.With();
+        var plugin = Path.Combine(folder.Path, "Lab.Padded");
+        // A valid rule file padded with a comment past the limit: only the size can refuse it.
+        var padding = "// " + new string('x', (int)SourcePluginCompiler.MaxSourceBytes) + "\n";
+        PluginFolder.WriteFile(Path.Combine(plugin, "GoodRule.cs"), padding + File.ReadAllText(Path.Combine(VettingCorpus.Folder("Vetting.Good"), "GoodRule.cs")));
+
+        var result = new SourcePluginCompiler(Path.Combine(folder.Path, ".cache")).Compile(plugin);
+
+        var problem = Assert.Single(result.Problems);
+        Assert.Equal(SourcePluginCompiler.SourceSizeCode, problem.Code);
+        Assert.Contains($"more than the limit of {SourcePluginCompiler.MaxSourceBytes} bytes", problem.Because, StringComparison.Ordinal);
+        Assert.Null(result.AssemblyPath);
+    }
+
+    [Fact]
+    public void Compile_InProcessCompilationPastItsLimit_IsRefusedNamingTheLimit()
+    {
+        using var folder = PluginFolder.With();
+        VettingCorpus.DropSource(folder.Path, "Vetting.Good");
+        // A zero limit: the wait ends before any compilation can, whatever Roslyn does with its token.
+        var compiler = new SourcePluginCompiler(Path.Combine(folder.Path, ".cache"), new InProcessSourceCompilation(TimeSpan.Zero));
+
+        var result = compiler.Compile(Path.Combine(folder.Path, "Vetting.Good"));
+
+        var problem = Assert.Single(result.Problems);
+        Assert.Equal(SourceImage.TimeLimitCode, problem.Code);
+        Assert.Contains("took longer than the limit of 0 s", problem.Because, StringComparison.Ordinal);
+    }
 }

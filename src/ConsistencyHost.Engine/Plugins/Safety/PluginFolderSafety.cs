@@ -24,7 +24,7 @@ public static class PluginFolderSafety
     public static void Demand(string pluginsPath, IEnumerable<string> plugins)
     {
         var problems = Problems(pluginsPath, plugins);
-        if (problems.Count > 0) throw new ProfileConfigurationException(problems);
+        if (problems.Count > 0) throw new ProfileConfigurationException(problems, ProfileConfigurationException.AccessTitle);
     }
 
     /// <summary>Every unsafe path with its mode, owner and the fix; empty when the folder is safe or not on Linux.</summary>
