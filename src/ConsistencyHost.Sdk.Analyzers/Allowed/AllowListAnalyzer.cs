@@ -143,7 +143,7 @@ public sealed class AllowListAnalyzer : DiagnosticAnalyzer
 
             if (allowed.Refused(symbol) is { } refused && !(refused is ITypeSymbol refusedType && banned.FindType(refusedType) is not null))
             {
-                report(Diagnostic.Create(Descriptors.NotAllowed, location, refused.ToDisplayString()));
+                report(Diagnostic.Create(Descriptors.NotAllowed, location, refused is IDynamicTypeSymbol ? DynamicApi : refused.ToDisplayString()));
             }
         }
     }

@@ -11,7 +11,7 @@ namespace ConsistencyHost.Engine.Tests.Vetting;
 /// <summary>The sample plugins of tests/fixtures/vetting, compiled the ways the tests compare.</summary>
 internal static class VettingCorpus
 {
-    public static string Folder(string name) => Path.Combine(RepoPaths.Root, "tests", "fixtures", "vetting", name);
+    public static string Folder(string name) => VettingFixtures.Folder(name);
 
     /// <summary>Compiles a corpus plugin against the host's reference set, without analyzers.</summary>
     public static CSharpCompilation Compile(string name, params string[] extraSources) =>
