@@ -43,12 +43,20 @@ public sealed class AllowListAnalyzer : DiagnosticAnalyzer
             OperationKind.Invocation, OperationKind.ObjectCreation, OperationKind.PropertyReference, OperationKind.FieldReference,
             OperationKind.EventReference, OperationKind.MethodReference, OperationKind.TypeOf, OperationKind.Binary,
             OperationKind.Unary, OperationKind.Conversion, OperationKind.VariableDeclarator);
-        context.RegisterOperationAction(c => c.ReportDiagnostic(Diagnostic.Create(Descriptors.NotAllowed, c.Operation.Syntax.GetLocation(), DynamicApi)),
-            OperationKind.DynamicInvocation, OperationKind.DynamicMemberReference, OperationKind.DynamicObjectCreation,
-            OperationKind.DynamicIndexerAccess);
+        context.RegisterOperationAction(CheckDynamic, OperationKind.DynamicInvocation, OperationKind.DynamicMemberReference,
+            OperationKind.DynamicObjectCreation, OperationKind.DynamicIndexerAccess);
         context.RegisterSymbolAction(c => CheckDeclaration(c, policy),
             SymbolKind.NamedType, SymbolKind.Method, SymbolKind.Field, SymbolKind.Property, SymbolKind.Event);
         context.RegisterCompilationEndAction(c => CheckAssemblyAttributes(c, policy));
+    }
+
+    /// <summary>One report per dynamic operation: a member reference that is the target of a dynamic call is the call's.</summary>
+    private static void CheckDynamic(OperationAnalysisContext context)
+    {
+        if (context.Operation is not IDynamicMemberReferenceOperation { Parent: IDynamicInvocationOperation })
+        {
+            context.ReportDiagnostic(Diagnostic.Create(Descriptors.NotAllowed, context.Operation.Syntax.GetLocation(), DynamicApi));
+        }
     }
 
     private static void CheckOperation(OperationAnalysisContext context, Policy policy)
@@ -68,7 +76,8 @@ public sealed class AllowListAnalyzer : DiagnosticAnalyzer
             IBinaryOperation binary => binary.OperatorMethod,
             IUnaryOperation unary => unary.OperatorMethod,
             IConversionOperation conversion => conversion.OperatorMethod,
-            IVariableDeclaratorOperation declarator => declarator.Symbol.Type,
+            // A 'var' local has the type of its initialiser, which is checked where it is made.
+            IVariableDeclaratorOperation declarator when declarator.Syntax.Parent is not VariableDeclarationSyntax { Type.IsVar: true } => declarator.Symbol.Type,
             _ => null,
         };
         policy.Report(symbol, context.Operation.Syntax.GetLocation(), context.ReportDiagnostic);
