@@ -59,13 +59,5 @@ internal static class VettingCorpus
     }
 
     /// <summary>Copies the corpus sources as a source plugin folder: root/Name/*.cs.</summary>
-    public static void DropSource(string pluginsRoot, string name)
-    {
-        var target = Path.Combine(pluginsRoot, name);
-        Directory.CreateDirectory(target);
-        foreach (var file in SourceFiles.Read(Folder(name)))
-        {
-            File.WriteAllText(Path.Combine(target, file.RelativePath), file.Text);
-        }
-    }
+    public static void DropSource(string pluginsRoot, string name) => PluginFolder.CopySourcePlugin(pluginsRoot, Folder(name));
 }
