@@ -189,4 +189,43 @@ public sealed class CompiledPluginVetterTests
 
         Assert.IsType<BadImageFormatException>(error);
     }
+
+    [Fact]
+    public void Vet_UnsafeInAFileLocalType_IsRefusedDespiteTheCompilerExemption()
+    {
+        // A file-local type's metadata name starts with '<' like the compiler's own types (<File>F…__Reach); the
+        // exemption for compiler-emitted Unsafe calls must not extend to code the author wrote in one.
+        var result = Vet("""
+            namespace Lab;
+            file static class Reach
+            {
+                public static ref int At(ref int first, int offset) => ref System.Runtime.CompilerServices.Unsafe.Add(ref first, offset);
+            }
+            public static class Entry { public static int Read(int[] items) { return Reach.At(ref items[0], 1 << 20); } }
+            """);
+
+        Assert.Contains(result.Problems, p => p.Code == "CHSDK1001" && p.Api.StartsWith("System.Runtime.CompilerServices.Unsafe.Add", StringComparison.Ordinal));
+    }
+
+    public static TheoryData<string> BuiltPlugins() =>
+    [
+        .. new[] { "plugins", "optional-plugins", "sample-plugins" }
+            .Select(drop => Path.Combine(ConsistencyHost.Tests.Shared.RepoPaths.Root, "artifacts", drop))
+            .Where(Directory.Exists)
+            .SelectMany(Directory.EnumerateDirectories)
+            .Select(folder => Path.Combine(folder, Path.GetFileName(folder) + ".dll"))
+            .Where(File.Exists)
+            .Select(path => Path.GetRelativePath(ConsistencyHost.Tests.Shared.RepoPaths.Root, path)),
+    ];
+
+    [Theory]
+    [MemberData(nameof(BuiltPlugins))]
+    public void Vet_EveryBuiltInOptionalAndSamplePlugin_PassesTheAllowList(string relativePath)
+    {
+        // The built-in rules (regular-expression generator output included), the opt-in rule and the sample lab's
+        // plugin as the build dropped them: the allow-list must not refuse what the repository ships.
+        var result = CompiledPluginVetter.Default.Vet(Path.Combine(ConsistencyHost.Tests.Shared.RepoPaths.Root, relativePath));
+
+        Assert.True(result.IsAccepted, result.Reason);
+    }
 }
