@@ -56,14 +56,14 @@ internal sealed class MetadataScan(PEReader pe, MetadataReader reader, HostBanne
             AddNotAllowed(FinalizeApi, owner, null);
         }
 
-        var usingType = MetadataNames.Of(reader, method.GetDeclaringType()).FullName;
+        var usingType = new CompilerSynthesized.Site(MetadataNames.Of(reader, method.GetDeclaringType()), reader.GetString(method.Name));
         foreach (var token in ILTokens.Of(pe.GetMethodBody(method.RelativeVirtualAddress)))
         {
             CheckToken(token, owner, usingType);
         }
     }
 
-    private void CheckToken(EntityHandle token, string owner, string usingType)
+    private void CheckToken(EntityHandle token, string owner, CompilerSynthesized.Site usingType)
     {
         switch (token.Kind)
         {
@@ -82,7 +82,7 @@ internal sealed class MetadataScan(PEReader pe, MetadataReader reader, HostBanne
         }
     }
 
-    private bool Exempted(IEnumerable<string> usedIds, MetadataTypeName type, string usingType)
+    private bool Exempted(IEnumerable<string> usedIds, MetadataTypeName type, CompilerSynthesized.Site usingType)
     {
         if (!usedIds.Append("T:" + type.FullName).Any(id => CompilerSynthesized.IsExempt(id, usingType)))
         {
@@ -93,7 +93,7 @@ internal sealed class MetadataScan(PEReader pe, MetadataReader reader, HostBanne
         return true;
     }
 
-    private void CheckMemberReference(MemberReferenceHandle handle, string owner, string usingType)
+    private void CheckMemberReference(MemberReferenceHandle handle, string owner, CompilerSynthesized.Site usingType)
     {
         var member = reader.GetMemberReference(handle);
         if (MetadataNames.OfParent(reader, member.Parent) is not { } type)

@@ -168,6 +168,9 @@ public sealed class CompiledPluginVetterTests
                 }
 
                 public static int First() { ReadOnlySpan<int> span = [1, 2, 3]; return span[0]; }
+
+                // C# 13 binds these to params ReadOnlySpan<T> overloads, built on an inline array by compiler helpers.
+                public static string Joined(string a, string b, int c) => string.Join(", ", a, b) + string.Concat(a, b, a, b, c.ToString());
             }
             """);
 
@@ -205,6 +208,28 @@ public sealed class CompiledPluginVetterTests
             """);
 
         Assert.Contains(result.Problems, p => p.Code == "CHSDK1001" && p.Api.StartsWith("System.Runtime.CompilerServices.Unsafe.Add", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Vet_UnsafeAndMemoryMarshalInIteratorsAndLambdas_AreRefusedDespiteTheCompilerExemption()
+    {
+        // An iterator's body moves into <Read>d__0.MoveNext and a lambda's into <>c; both names start with '<' like
+        // the compiler's own helpers, but they hold the author's code (the Hostile.MemoryMarshalSpan fixture's case).
+        var result = Vet("""
+            namespace Lab;
+            public static class Sneaky
+            {
+                public static IEnumerable<int> Read(int[] items)
+                {
+                    yield return System.Runtime.CompilerServices.Unsafe.Add(ref items[0], 1 << 20);
+                }
+
+                public static Func<int> Later(int[] items) => () => System.Runtime.InteropServices.MemoryMarshal.CreateSpan(ref items[0], 1 << 20)[4096];
+            }
+            """);
+
+        Assert.Contains(result.Problems, p => p is { Code: "CHSDK1001", Member: "Lab.Sneaky.Read" } && p.Api.StartsWith("System.Runtime.CompilerServices.Unsafe.Add", StringComparison.Ordinal));
+        Assert.Contains(result.Problems, p => p is { Code: "CHSDK1002", Member: "Lab.Sneaky.Later" } && p.Api.StartsWith("System.Runtime.InteropServices.MemoryMarshal.CreateSpan", StringComparison.Ordinal));
     }
 
     public static TheoryData<string> BuiltPlugins() =>
