@@ -3,7 +3,7 @@ using Microsoft.CodeAnalysis;
 namespace ConsistencyHost.Sdk.Analyzers;
 
 /// <summary>
-/// Every diagnostic the SDK analyzers report. Ranges: CHSDK0xxx rule metadata, CHSDK1xxx reach (banned APIs),
+/// Every diagnostic the SDK analyzers report. Ranges: CHSDK0xxx rule metadata, CHSDK1xxx reach (banned APIs, the allow-list),
 /// CHSDK2xxx determinism and shared state, CHSDK3xxx use of the SDK contract.
 /// </summary>
 public static class Descriptors
@@ -30,6 +30,11 @@ public static class Descriptors
     public static readonly DiagnosticDescriptor BannedApi = Create("CHSDK1001", "Reach", DiagnosticSeverity.Error,
         "Banned API used in a rule plugin",
         "'{0}' is banned in rule plugins by {1} ({2})");
+
+    /// <summary>A plugin references an API that is not on the allow-list.</summary>
+    public static readonly DiagnosticDescriptor NotAllowed = Create("CHSDK1002", "Reach", DiagnosticSeverity.Error,
+        "API not on the allow-list used in a rule plugin",
+        "'{0}' is not on the allow-list of APIs a rule plugin may use (AllowedApis.txt)");
 
     /// <summary>A plugin uses a nondeterministic API from the banned list.</summary>
     public static readonly DiagnosticDescriptor Nondeterminism = Create("CHSDK2001", "Determinism", DiagnosticSeverity.Error,

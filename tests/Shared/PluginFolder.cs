@@ -40,6 +40,10 @@ internal sealed class PluginFolder : IDisposable
         }
     }
 
+    /// <summary>Copies a source plugin's folder (tests/fixtures/…/Name) into a plugin folder as Name/, with the modes the host accepts.</summary>
+    public static void CopySourcePlugin(string pluginsPath, string sourceFolder) =>
+        CopyDirectory(sourceFolder, System.IO.Path.Combine(pluginsPath, System.IO.Path.GetFileName(sourceFolder)));
+
     /// <summary>Creates a folder (and any missing parents) with mode 0755; returns its path.</summary>
     public static string CreateFolder(string path)
     {

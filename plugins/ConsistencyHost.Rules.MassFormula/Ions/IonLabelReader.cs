@@ -9,16 +9,21 @@ namespace ConsistencyHost.Rules.MassFormula.Ions;
 /// Reads the ion labels authors write: "[M+H]+", "[M + H]+", "(M+H)+", "[M+H]⁺", "MH+", "MNa+", "M+•",
 /// "[M]+", "M⁺˙", "[M−H]−", "[M+2H]2+", "[M+H−H2O]+", "[2M+Na]+".
 /// </summary>
-/// <remarks>Common practice: the label forms of journal HRMS lines (nmr-data-standards.md §5, §7.3).</remarks>
+/// <remarks>
+/// Common practice: the label forms of journal HRMS lines (nmr-data-standards.md §5, §7.3).
+/// The patterns are anchored and linear, so they need no match time-out; stating Timeout.Infinite keeps the
+/// generated code from reading the process-wide default time-out through AppContext.GetData, which is not on the
+/// plugin allow-list.
+/// </remarks>
 internal static partial class IonLabelReader
 {
-    [GeneratedRegex(@"^(?<open>\[)?(?<n>[1-9]?)M(?<groups>(?:[+-][1-9]?[A-Z][A-Za-z0-9]*)*)(?(open)\])(?<z1>[1-9]?)(?<sign>[+-])(?<z2>[1-9]?)$", RegexOptions.CultureInvariant)]
+    [GeneratedRegex(@"^(?<open>\[)?(?<n>[1-9]?)M(?<groups>(?:[+-][1-9]?[A-Z][A-Za-z0-9]*)*)(?(open)\])(?<z1>[1-9]?)(?<sign>[+-])(?<z2>[1-9]?)$", RegexOptions.CultureInvariant, Timeout.Infinite)]
     private static partial Regex LabelPattern();
 
-    [GeneratedRegex(@"^(?<n>[1-9]?)M(?<group>[A-Z][A-Za-z0-9]*)(?<z>[1-9]?)(?<sign>[+-])$", RegexOptions.CultureInvariant)]
+    [GeneratedRegex(@"^(?<n>[1-9]?)M(?<group>[A-Z][A-Za-z0-9]*)(?<z>[1-9]?)(?<sign>[+-])$", RegexOptions.CultureInvariant, Timeout.Infinite)]
     private static partial Regex ShortPattern();
 
-    [GeneratedRegex(@"[+-][1-9]?[A-Z][A-Za-z0-9]*", RegexOptions.CultureInvariant)]
+    [GeneratedRegex(@"[+-][1-9]?[A-Z][A-Za-z0-9]*", RegexOptions.CultureInvariant, Timeout.Infinite)]
     private static partial Regex GroupPattern();
 
     /// <summary>The label read, or null and a sentence saying what is wrong with it.</summary>

@@ -4,7 +4,7 @@ using System.Reflection.PortableExecutable;
 namespace ConsistencyHost.Engine.Vetting;
 
 /// <summary>
-/// Vets a compiled plugin assembly against the SDK's banned list by reading its metadata and IL, without
+/// Vets a compiled plugin assembly against the SDK's banned list and allow-list by reading its metadata and IL, without
 /// loading or running it: member and type references used by each method body, P/Invoke declarations,
 /// attributes (unsafe code, skipped local initialisation, unsafe accessors), base types, and static fields
 /// that hold mutable state. Each problem names the API and the plugin member that uses it.
@@ -17,11 +17,12 @@ namespace ConsistencyHost.Engine.Vetting;
 public sealed class CompiledPluginVetter
 {
     private readonly HostBannedList _banned;
+    private readonly HostAllowedList _allowed;
 
-    private CompiledPluginVetter(HostBannedList banned) => _banned = banned;
+    private CompiledPluginVetter(HostBannedList banned, HostAllowedList allowed) => (_banned, _allowed) = (banned, allowed);
 
-    /// <summary>A vetter using the banned list embedded in ConsistencyHost.Sdk.</summary>
-    public static CompiledPluginVetter Default { get; } = new(HostBannedList.FromSdk);
+    /// <summary>A vetter using the banned list and the allow-list embedded in ConsistencyHost.Sdk.</summary>
+    public static CompiledPluginVetter Default { get; } = new(HostBannedList.FromSdk, HostAllowedList.FromSdk);
 
     /// <summary>Vets the assembly at <paramref name="path"/>.</summary>
     public VettingResult Vet(string path)
@@ -39,7 +40,7 @@ public sealed class CompiledPluginVetter
             return new VettingResult([new VettingProblem("CHSDK1001", "a file without .NET metadata", "which cannot be vetted", null)]);
         }
 
-        var scan = new MetadataScan(pe, pe.GetMetadataReader(), _banned);
+        var scan = new MetadataScan(pe, pe.GetMetadataReader(), _banned, _allowed);
         scan.Run();
         return new VettingResult(scan.Problems);
     }

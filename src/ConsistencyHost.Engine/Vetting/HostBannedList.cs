@@ -1,3 +1,4 @@
+using ConsistencyHost.Sdk.Analyzers;
 using ConsistencyHost.Sdk.Analyzers.Banned;
 using ConsistencyHost.Sdk.Rules;
 
@@ -15,7 +16,7 @@ internal sealed class HostBannedList
         _byId = list.Entries.ToDictionary(e => e.DocumentationId, StringComparer.Ordinal);
 
     /// <summary>The list embedded in ConsistencyHost.Sdk.</summary>
-    public static HostBannedList FromSdk { get; } = new(BannedApiList.Parse(ReadSdkResource()));
+    public static HostBannedList FromSdk { get; } = new(BannedApiList.Parse(ApiListResource.Read(typeof(IRule).Assembly, BannedApiList.ResourceName)));
 
     /// <summary>The entry with exactly this id, or null.</summary>
     public BannedApiEntry? ById(string documentationId) => _byId.GetValueOrDefault(documentationId);
@@ -32,19 +33,6 @@ internal sealed class HostBannedList
             if (ById("T:" + name) is { } entry) return entry;
         }
 
-        for (var ns = type.Namespace; ns.Length > 0; ns = ns.LastIndexOf('.') is var dot and > 0 ? ns[..dot] : "")
-        {
-            if (ById("N:" + ns) is { } entry) return entry;
-        }
-
-        return null;
-    }
-
-    private static string ReadSdkResource()
-    {
-        using var stream = typeof(IRule).Assembly.GetManifestResourceStream(BannedApiList.ResourceName)
-                           ?? throw new InvalidOperationException($"ConsistencyHost.Sdk lacks its resource {BannedApiList.ResourceName}");
-        using var reader = new StreamReader(stream);
-        return reader.ReadToEnd();
+        return type.NamespaceAndParents().Select(ns => ById("N:" + ns)).FirstOrDefault(entry => entry is not null);
     }
 }

@@ -38,16 +38,22 @@ internal static partial class MetadataNames
     /// <summary>The generic type definition of an instantiation (<c>List&lt;int&gt;</c> → <c>List`1</c>); null otherwise.</summary>
     public static MetadataTypeName? GenericDefinition(MetadataReader reader, TypeSpecificationHandle handle)
     {
+        var definition = GenericDefinitionHandle(reader, handle);
+        return definition.Kind == HandleKind.TypeReference ? Of(reader, (TypeReferenceHandle)definition)
+            : definition.Kind == HandleKind.TypeDefinition ? Of(reader, (TypeDefinitionHandle)definition) : null;
+    }
+
+    /// <summary>The handle of an instantiation's generic type definition; a nil handle for any other type specification.</summary>
+    public static EntityHandle GenericDefinitionHandle(MetadataReader reader, TypeSpecificationHandle handle)
+    {
         var blob = reader.GetBlobReader(reader.GetTypeSpecification(handle).Signature);
         if (blob.ReadSignatureTypeCode() != SignatureTypeCode.GenericTypeInstance)
         {
-            return null;
+            return default;
         }
 
         blob.ReadSignatureTypeCode();
-        var definition = blob.ReadTypeHandle();
-        return definition.Kind == HandleKind.TypeReference ? Of(reader, (TypeReferenceHandle)definition)
-            : definition.Kind == HandleKind.TypeDefinition ? Of(reader, (TypeDefinitionHandle)definition) : null;
+        return blob.ReadTypeHandle();
     }
 
     /// <summary>

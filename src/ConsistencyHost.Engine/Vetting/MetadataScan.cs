@@ -7,11 +7,13 @@ namespace ConsistencyHost.Engine.Vetting;
 
 /// <summary>
 /// One pass over an assembly's metadata for <see cref="CompiledPluginVetter"/>: method bodies (with the
-/// plugin member each use is attributed to), P/Invoke, attributes, base types and static fields, then every
-/// type reference not yet attributed, so that a banned type used only in a signature is still caught.
+/// plugin member each use is attributed to), P/Invoke, finalizers, attributes, base types and static fields,
+/// then every type reference not yet attributed, so that a type used only in a signature is still caught.
+/// Each external type and member is refused when it is banned (the list's reason) or not on the allow-list.
 /// </summary>
-internal sealed class MetadataScan(PEReader pe, MetadataReader reader, HostBannedList banned)
+internal sealed class MetadataScan(PEReader pe, MetadataReader reader, HostBannedList banned, HostAllowedList allowed)
 {
+    private const string FinalizeApi = "System.Object.Finalize";
     private const string PInvokeId = "T:System.Runtime.InteropServices.DllImportAttribute";
     private readonly HashSet<string> _seen = new(StringComparer.Ordinal);
     private readonly HashSet<string> _typesWithOwner = new(StringComparer.Ordinal);
@@ -48,14 +50,20 @@ internal sealed class MetadataScan(PEReader pe, MetadataReader reader, HostBanne
         }
 
         var owner = MetadataNames.Describe(reader, handle);
-        var usingType = MetadataNames.Of(reader, method.GetDeclaringType()).FullName;
+        if (IsFinalizer(method))
+        {
+            // A finalizer runs on the runtime's finalizer thread, after and outside the rule's run.
+            AddNotAllowed(FinalizeApi, owner, null);
+        }
+
+        var usingType = new CompilerSynthesized.Site(MetadataNames.Of(reader, method.GetDeclaringType()), reader.GetString(method.Name));
         foreach (var token in ILTokens.Of(pe.GetMethodBody(method.RelativeVirtualAddress)))
         {
             CheckToken(token, owner, usingType);
         }
     }
 
-    private void CheckToken(EntityHandle token, string owner, string usingType)
+    private void CheckToken(EntityHandle token, string owner, CompilerSynthesized.Site usingType)
     {
         switch (token.Kind)
         {
@@ -67,12 +75,14 @@ internal sealed class MetadataScan(PEReader pe, MetadataReader reader, HostBanne
                 break;
             case HandleKind.TypeReference:
                 var type = MetadataNames.Of(reader, (TypeReferenceHandle)token);
-                if (banned.FindType(type) is { } entry && !Exempted(["T:" + type.FullName], type, usingType)) Add(entry, type.FullName, owner, type);
+                if (Exempted(["T:" + type.FullName], type, usingType)) break;
+                if (banned.FindType(type) is { } entry) Add(entry, type.FullName, owner, type);
+                else if (!allowed.AllowsType(type)) AddNotAllowed(type.FullName, owner, type);
                 break;
         }
     }
 
-    private bool Exempted(IEnumerable<string> usedIds, MetadataTypeName type, string usingType)
+    private bool Exempted(IEnumerable<string> usedIds, MetadataTypeName type, CompilerSynthesized.Site usingType)
     {
         if (!usedIds.Append("T:" + type.FullName).Any(id => CompilerSynthesized.IsExempt(id, usingType)))
         {
@@ -83,7 +93,7 @@ internal sealed class MetadataScan(PEReader pe, MetadataReader reader, HostBanne
         return true;
     }
 
-    private void CheckMemberReference(MemberReferenceHandle handle, string owner, string usingType)
+    private void CheckMemberReference(MemberReferenceHandle handle, string owner, CompilerSynthesized.Site usingType)
     {
         var member = reader.GetMemberReference(handle);
         if (MetadataNames.OfParent(reader, member.Parent) is not { } type)
@@ -92,21 +102,33 @@ internal sealed class MetadataScan(PEReader pe, MetadataReader reader, HostBanne
         }
 
         var ids = MemberIds.For(reader, member, type).ToList();
-        if (banned.FindMember(ids, type) is { } entry && !Exempted(ids, type, usingType))
+        if (IsDefinedHere(member.Parent) || Exempted(ids, type, usingType))
+        {
+            return;
+        }
+
+        if (banned.FindMember(ids, type) is { } entry)
         {
             // Name the member as the list does when the list names it (P:System.DateTime.Now, not get_Now).
             var api = ids.FirstOrDefault(id => id == entry.DocumentationId) ?? ids[0];
             Add(entry, api[2..], owner, type);
         }
+        else if (!allowed.AllowsMember(ids, type))
+        {
+            AddNotAllowed(ids[0][2..], owner, type);
+        }
     }
 
     private void CheckBaseType(TypeDefinitionHandle handle, TypeDefinition type)
     {
-        if (type.BaseType.Kind == HandleKind.TypeReference &&
-            MetadataNames.Of(reader, (TypeReferenceHandle)type.BaseType) is var baseType && banned.FindType(baseType) is { } entry)
+        if (type.BaseType.IsNil || IsDefinedHere(type.BaseType) || MetadataNames.OfParent(reader, type.BaseType) is not { } baseType)
         {
-            Add(entry, baseType.FullName, MetadataNames.Of(reader, handle).FullName, baseType);
+            return;
         }
+
+        var owner = MetadataNames.Of(reader, handle).FullName;
+        if (banned.FindType(baseType) is { } entry) Add(entry, baseType.FullName, owner, baseType);
+        else if (!allowed.AllowsType(baseType)) AddNotAllowed(baseType.FullName, owner, baseType);
     }
 
     private void CheckAttribute(CustomAttribute attribute)
@@ -114,10 +136,13 @@ internal sealed class MetadataScan(PEReader pe, MetadataReader reader, HostBanne
         var type = attribute.Constructor.Kind == HandleKind.MemberReference
             ? MetadataNames.OfParent(reader, reader.GetMemberReference((MemberReferenceHandle)attribute.Constructor).Parent)
             : null;
-        if (type is not null && banned.FindType(type) is { } entry)
+        if (type is null)
         {
-            Add(entry, "[" + type.FullName + "]", AttributeOwner(attribute.Parent), type);
+            return;
         }
+
+        if (banned.FindType(type) is { } entry) Add(entry, "[" + type.FullName + "]", AttributeOwner(attribute.Parent), type);
+        else if (!allowed.AllowsType(type)) AddNotAllowed("[" + type.FullName + "]", AttributeOwner(attribute.Parent), type);
     }
 
     private void CheckStaticField(TypeDefinitionHandle typeHandle, FieldDefinitionHandle handle)
@@ -131,10 +156,13 @@ internal sealed class MetadataScan(PEReader pe, MetadataReader reader, HostBanne
     private void CheckUnattributedType(TypeReferenceHandle handle)
     {
         var type = MetadataNames.Of(reader, handle);
-        if (!_typesWithOwner.Contains(type.FullName) && banned.FindType(type) is { } entry)
+        if (_typesWithOwner.Contains(type.FullName))
         {
-            Add(entry, type.FullName, null, type);
+            return;
         }
+
+        if (banned.FindType(type) is { } entry) Add(entry, type.FullName, null, type);
+        else if (!allowed.AllowsType(type)) AddNotAllowed(type.FullName, null, type);
     }
 
     private string? AttributeOwner(EntityHandle parent) => parent.Kind switch
@@ -146,11 +174,37 @@ internal sealed class MetadataScan(PEReader pe, MetadataReader reader, HostBanne
         _ => null,
     };
 
-    private void Add(BannedApiEntry entry, string api, string? owner, MetadataTypeName? type)
+    private void Add(BannedApiEntry entry, string api, string? owner, MetadataTypeName? type) =>
+        Add(entry.IsNondeterminism ? Descriptors.Nondeterminism.Id : Descriptors.BannedApi.Id, api,
+            $"banned by {entry.DocumentationId} ({entry.Explanation})", owner, type);
+
+    private void AddNotAllowed(string api, string? owner, MetadataTypeName? type) =>
+        Add(Descriptors.NotAllowed.Id, api, NotAllowedReason, owner, type);
+
+    private void Add(string code, string api, string because, string? owner, MetadataTypeName? type)
     {
         if (type is not null && owner is not null) _typesWithOwner.Add(type.FullName);
-        var code = entry.IsNondeterminism ? Descriptors.Nondeterminism.Id : Descriptors.BannedApi.Id;
-        var problem = new VettingProblem(code, api, $"banned by {entry.DocumentationId} ({entry.Explanation})", owner);
+        var problem = new VettingProblem(code, api, because, owner);
         if (_seen.Add(problem.ToString())) Problems.Add(problem);
     }
+
+    /// <summary>How a refusal for an API off the allow-list reads, after the API's name.</summary>
+    public const string NotAllowedReason = "not on the allow-list of APIs a rule plugin may use (AllowedApis.txt)";
+
+    /// <summary>True for a parent that is this assembly's own type or an instantiation of one: the plugin's own code is vetted where it is defined.</summary>
+    private bool IsDefinedHere(EntityHandle parent) => parent.Kind switch
+    {
+        HandleKind.TypeDefinition or HandleKind.MethodDefinition => true,
+        HandleKind.TypeSpecification => MetadataNames.GenericDefinitionHandle(reader, (TypeSpecificationHandle)parent).Kind == HandleKind.TypeDefinition,
+        _ => false,
+    };
+
+    /// <summary>
+    /// A virtual, parameterless, void method named Finalize overrides Object.Finalize whatever its body holds
+    /// (hand-written IL need not call the base, so the call alone does not reveal it).
+    /// </summary>
+    private bool IsFinalizer(MethodDefinition method) =>
+        (method.Attributes & System.Reflection.MethodAttributes.Virtual) != 0 && reader.StringComparer.Equals(method.Name, "Finalize") &&
+        method.DecodeSignature(DocIdSignatureProvider.Instance, null) is { ParameterTypes.Length: 0, ReturnType: "System.Void" };
+
 }

@@ -19,6 +19,15 @@ internal sealed record MetadataTypeName(string Namespace, IReadOnlyList<string> 
         }
     }
 
+    /// <summary>The namespace and each namespace it is in, innermost first (<c>System.IO.Pipes</c>, <c>System.IO</c>, <c>System</c>).</summary>
+    public IEnumerable<string> NamespaceAndParents()
+    {
+        for (var ns = Namespace; ns.Length > 0; ns = ns.LastIndexOf('.') is var dot and > 0 ? ns[..dot] : "")
+        {
+            yield return ns;
+        }
+    }
+
     /// <summary>A type nested in this one.</summary>
     public MetadataTypeName Child(string name) => this with { Nested = [.. Nested, name] };
 

@@ -1,6 +1,5 @@
 using System;
 using System.Collections.Generic;
-using System.IO;
 using System.Linq;
 
 namespace ConsistencyHost.Sdk.Analyzers.Banned;
@@ -91,11 +90,5 @@ public sealed class BannedApiList
         return new BannedApiEntry(id, category, reason, number);
     }
 
-    private static BannedApiList LoadEmbedded()
-    {
-        using var stream = typeof(BannedApiList).Assembly.GetManifestResourceStream(ResourceName)
-                           ?? throw new InvalidOperationException($"resource {ResourceName} is missing from the analyzer assembly");
-        using var reader = new StreamReader(stream);
-        return Parse(reader.ReadToEnd());
-    }
+    private static BannedApiList LoadEmbedded() => Parse(ApiListResource.Read(typeof(BannedApiList).Assembly, ResourceName));
 }

@@ -69,12 +69,15 @@ public sealed class CompiledPluginVetterTests
             }
             """);
 
-        Assert.All(result.Problems, p => Assert.Equal(("CHSDK1001", "Lab.Reach.Run"), (p.Code, p.Member)));
+        // The banned calls name their reason (CHSDK1001); the lookups between them are off the allow-list (CHSDK1002).
+        var banned = result.Problems.Where(p => p.Code == "CHSDK1001").ToList();
+        Assert.All(banned, p => Assert.Equal("Lab.Reach.Run", p.Member));
         Assert.Equal(
             ["System.Reflection.Assembly.GetType", "System.Reflection.ConstructorInfo.Invoke", "System.Reflection.MethodBase.Invoke",
              "System.Reflection.MethodInfo.CreateDelegate", "System.Type.GetType"],
             // The API is named with its documentation-id signature; the member name is what this test is about.
-            result.Problems.Select(p => p.Api.Split('(', '`')[0]).Distinct().Order(StringComparer.Ordinal));
+            banned.Select(p => p.Api.Split('(', '`')[0]).Distinct().Order(StringComparer.Ordinal));
+        Assert.Contains(result.Problems, p => p is { Code: "CHSDK1002", Api: "System.Type.GetConstructors", Member: "Lab.Reach.Run" });
     }
 
     [Fact]
@@ -165,6 +168,9 @@ public sealed class CompiledPluginVetterTests
                 }
 
                 public static int First() { ReadOnlySpan<int> span = [1, 2, 3]; return span[0]; }
+
+                // C# 13 binds these to params ReadOnlySpan<T> overloads, built on an inline array by compiler helpers.
+                public static string Joined(string a, string b, int c) => string.Join(", ", a, b) + string.Concat(a, b, a, b, c.ToString());
             }
             """);
 
@@ -185,5 +191,66 @@ public sealed class CompiledPluginVetterTests
         var error = Record.Exception(() => CompiledPluginVetter.Default.Vet(new MemoryStream("not a portable executable"u8.ToArray())));
 
         Assert.IsType<BadImageFormatException>(error);
+    }
+
+    [Fact]
+    public void Vet_UnsafeInAFileLocalType_IsRefusedDespiteTheCompilerExemption()
+    {
+        // A file-local type's metadata name starts with '<' like the compiler's own types (<File>F…__Reach); the
+        // exemption for compiler-emitted Unsafe calls must not extend to code the author wrote in one.
+        var result = Vet("""
+            namespace Lab;
+            file static class Reach
+            {
+                public static ref int At(ref int first, int offset) => ref System.Runtime.CompilerServices.Unsafe.Add(ref first, offset);
+            }
+            public static class Entry { public static int Read(int[] items) { return Reach.At(ref items[0], 1 << 20); } }
+            """);
+
+        Assert.Contains(result.Problems, p => p.Code == "CHSDK1001" && p.Api.StartsWith("System.Runtime.CompilerServices.Unsafe.Add", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Vet_UnsafeAndMemoryMarshalInIteratorsAndLambdas_AreRefusedDespiteTheCompilerExemption()
+    {
+        // An iterator's body moves into <Read>d__0.MoveNext and a lambda's into <>c; both names start with '<' like
+        // the compiler's own helpers, but they hold the author's code (the Hostile.MemoryMarshalSpan fixture's case).
+        var result = Vet("""
+            namespace Lab;
+            public static class Sneaky
+            {
+                public static IEnumerable<int> Read(int[] items)
+                {
+                    yield return System.Runtime.CompilerServices.Unsafe.Add(ref items[0], 1 << 20);
+                }
+
+                public static Func<int> Later(int[] items) => () => System.Runtime.InteropServices.MemoryMarshal.CreateSpan(ref items[0], 1 << 20)[4096];
+            }
+            """);
+
+        Assert.Contains(result.Problems, p => p is { Code: "CHSDK1001", Member: "Lab.Sneaky.Read" } && p.Api.StartsWith("System.Runtime.CompilerServices.Unsafe.Add", StringComparison.Ordinal));
+        Assert.Contains(result.Problems, p => p is { Code: "CHSDK1002", Member: "Lab.Sneaky.Later" } && p.Api.StartsWith("System.Runtime.InteropServices.MemoryMarshal.CreateSpan", StringComparison.Ordinal));
+    }
+
+    public static TheoryData<string> BuiltPlugins() =>
+    [
+        .. new[] { "plugins", "optional-plugins", "sample-plugins" }
+            .Select(drop => Path.Combine(ConsistencyHost.Tests.Shared.RepoPaths.Root, "artifacts", drop))
+            .Where(Directory.Exists)
+            .SelectMany(Directory.EnumerateDirectories)
+            .Select(folder => Path.Combine(folder, Path.GetFileName(folder) + ".dll"))
+            .Where(File.Exists)
+            .Select(path => Path.GetRelativePath(ConsistencyHost.Tests.Shared.RepoPaths.Root, path)),
+    ];
+
+    [Theory]
+    [MemberData(nameof(BuiltPlugins))]
+    public void Vet_EveryBuiltInOptionalAndSamplePlugin_PassesTheAllowList(string relativePath)
+    {
+        // The built-in rules (regular-expression generator output included), the opt-in rule and the sample lab's
+        // plugin as the build dropped them: the allow-list must not refuse what the repository ships.
+        var result = CompiledPluginVetter.Default.Vet(Path.Combine(ConsistencyHost.Tests.Shared.RepoPaths.Root, relativePath));
+
+        Assert.True(result.IsAccepted, result.Reason);
     }
 }

@@ -11,7 +11,7 @@ namespace ConsistencyHost.Engine.Tests.Vetting;
 /// <summary>The sample plugins of tests/fixtures/vetting, compiled the ways the tests compare.</summary>
 internal static class VettingCorpus
 {
-    public static string Folder(string name) => Path.Combine(RepoPaths.Root, "tests", "fixtures", "vetting", name);
+    public static string Folder(string name) => VettingFixtures.Folder(name);
 
     /// <summary>Compiles a corpus plugin against the host's reference set, without analyzers.</summary>
     public static CSharpCompilation Compile(string name, params string[] extraSources) =>
@@ -59,13 +59,5 @@ internal static class VettingCorpus
     }
 
     /// <summary>Copies the corpus sources as a source plugin folder: root/Name/*.cs.</summary>
-    public static void DropSource(string pluginsRoot, string name)
-    {
-        var target = Path.Combine(pluginsRoot, name);
-        Directory.CreateDirectory(target);
-        foreach (var file in SourceFiles.Read(Folder(name)))
-        {
-            File.WriteAllText(Path.Combine(target, file.RelativePath), file.Text);
-        }
-    }
+    public static void DropSource(string pluginsRoot, string name) => PluginFolder.CopySourcePlugin(pluginsRoot, Folder(name));
 }

@@ -25,7 +25,7 @@ public sealed class BannedApiListTests
         var compilation = CSharpCompilation.Create("probe", references: Net100.References.All);
         var unresolved = BannedApiList.Embedded.Entries
             .Where(entry => entry.Kind == 'N'
-                ? FindNamespace(compilation, entry.Name) is null
+                ? ReferenceNamespaces.Find(compilation, entry.Name) is null
                 : DocumentationCommentId.GetSymbolsForDeclarationId(entry.DocumentationId, compilation).IsEmpty)
             .Select(entry => entry.DocumentationId)
             .ToList();
@@ -79,16 +79,5 @@ public sealed class BannedApiListTests
         using var copy = new MemoryStream();
         stream.CopyTo(copy);
         return copy.ToArray();
-    }
-
-    private static INamespaceSymbol? FindNamespace(Compilation compilation, string name)
-    {
-        INamespaceSymbol? current = compilation.GlobalNamespace;
-        foreach (var part in name.Split('.'))
-        {
-            current = current?.GetNamespaceMembers().FirstOrDefault(ns => ns.Name == part);
-        }
-
-        return current;
     }
 }
