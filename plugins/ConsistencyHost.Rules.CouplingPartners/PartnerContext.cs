@@ -2,6 +2,7 @@ using ConsistencyHost.Chemistry.Model;
 using ConsistencyHost.Chemistry.Perception.Symmetry;
 using ConsistencyHost.Sdk.Entries;
 using ConsistencyHost.Spectra.Analysis.Interpretation;
+using ConsistencyHost.Spectra.Analysis.Prediction;
 using ConsistencyHost.Spectra.Analysis.Prediction.Coupling;
 using ConsistencyHost.Spectra.Model;
 
@@ -30,6 +31,9 @@ internal sealed record PartnerContext(
 
     /// <summary>The coupling tree of every hydrogen class, shared through the entry view (built once per entry).</summary>
     public IReadOnlyList<CouplingTree>? Trees => Analysis.Couplings;
+
+    /// <summary>The predicted 1H window of every hydrogen class in this spectrum's solvent (shared, computed once per entry).</summary>
+    public IReadOnlyList<ShiftPrediction>? HydrogenWindows => Analysis.Shifts(SpectrumIndex)?.Hydrogen;
 
     /// <summary>What the partner search reads of each signal, in reported order (read once per spectrum).</summary>
     public IReadOnlyList<SignalFacts> Facts => _facts ??= [.. Spectrum.Signals.Select(SignalFacts.Of)];

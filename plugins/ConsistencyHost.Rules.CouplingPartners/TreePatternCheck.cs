@@ -2,6 +2,7 @@ using System.Globalization;
 using ConsistencyHost.Sdk.Findings;
 using ConsistencyHost.Spectra.Model;
 using ConsistencyHost.Spectra.Analysis.Assignment;
+using ConsistencyHost.Spectra.Analysis.Prediction;
 using ConsistencyHost.Spectra.Analysis.Prediction.Coupling;
 
 namespace ConsistencyHost.Rules.CouplingPartners;
@@ -9,16 +10,21 @@ namespace ConsistencyHost.Rules.CouplingPartners;
 /// <summary>
 /// The lower side of the n+1 check: a first-order pattern with fewer splittings than the couplings of its
 /// protons that cannot vanish (an OCH2 next to a CH3 reported as a t, an isopropyl CH as a q). Couplings that
-/// may be unresolved (meta, allylic, ring vicinal, to OH/NH) never count, and a partner within
-/// <see cref="SecondOrderPpm"/> makes the pair second order (A2B2 can look like a singlet), so it is skipped.
+/// may be unresolved (meta, allylic, ring vicinal, to OH/NH) never count, and a partner closer than
+/// <see cref="StrongCouplingRatio"/> times the coupling makes the pair second order (A2B2 can look like a singlet), so it is skipped.
 /// </summary>
 internal static class TreePatternCheck
 {
     /// <summary>
-    /// Partners closer than this (ppm) may collapse the pattern (Δν/J small even at 600 MHz: 0.3 ppm = 180 Hz,
-    /// but roofed AB-type patterns are routinely reported as simpler ones below that; common practice).
+    /// A partner closer than this many times the coupling (Δν/J, both in Hz) makes the pair strongly coupled: its
+    /// lines may merge or lean so far that the reported pattern is a fair reading of a second-order multiplet (an
+    /// A2B2 can look like a singlet). Line counts hold well above it (common practice: first order from Δν/J ≈ 10,
+    /// recognisable n+1 patterns with roofing down to about 3).
     /// </summary>
-    private const double SecondOrderPpm = 0.3;
+    private const double StrongCouplingRatio = 3;
+
+    /// <summary>Observe frequency assumed when a list does not state it: low for today's instruments, so the cut is generous.</summary>
+    private const double AssumedFrequencyMHz = 300;
 
     public static IEnumerable<Finding> Check(PartnerContext context)
     {
@@ -29,32 +35,66 @@ internal static class TreePatternCheck
             var tree = context.Trees![cls];
             var forced = tree.Links.Where(l => !l.IsHeteronuclear && !l.Range.MayVanish && l.PartnerClass != cls).ToList();
             var needed = forced.Sum(l => l.Count);
-            if (implied >= needed || AnyLookAlikeAllows(context, cls, implied) || !AllFirstOrder(context, signal.CentrePpm, forced)) continue;
+            if (implied >= needed || AnyLookAlikeAllows(context, cls, implied, signal.CentrePpm) || !AllFirstOrder(context, signal.CentrePpm, forced)) continue;
             yield return Finding(context, s, cls, implied, needed, forced, tree);
         }
     }
 
     /// <summary>
-    /// True when another class of the same size allows the pattern: the assignment is chosen on counts, so it may
-    /// have swapped two look-alike classes (an aldehyde CH and an aromatic CH); judge only what no swap explains.
+    /// True when another class of the same size allows the pattern and could as well be the one at this shift:
+    /// the assignment is chosen on counts and patterns first, so two look-alike classes (an aldehyde CH and an
+    /// aromatic CH) may be swapped; judge only what no plausible swap explains. A look-alike is plausible here
+    /// when the signal lies in its predicted window and putting it here (and the judged class where the
+    /// look-alike sits) fits the predicted shifts nearly as well as the assignment does.
     /// </summary>
-    private static bool AnyLookAlikeAllows(PartnerContext context, int cls, int implied)
+    private static bool AnyLookAlikeAllows(PartnerContext context, int cls, int implied, double shift)
     {
         var classes = context.Equivalence!.HydrogenClasses;
+        var windows = context.HydrogenWindows;
         var size = classes[cls].ParentAtoms.Length;
         for (var c = 0; c < classes.Length; c++)
         {
-            if (c != cls && !classes[c].IsExchangeable && classes[c].ParentAtoms.Length == size && context.Trees![c].ForcedPartners <= implied) return true;
+            if (c == cls || classes[c].IsExchangeable || classes[c].ParentAtoms.Length != size || context.Trees![c].ForcedPartners > implied) continue;
+            if (windows is null || PlausibleSwap(context, windows, cls, c, shift)) return true;
         }
 
         return false;
     }
 
+    /// <summary>
+    /// Window slack (ppm) and how much worse (ppm of distance from the most likely shifts) a swap may fit and still
+    /// count as plausible: the increment methods' typical error for 1H (Pretsch; docs/spectrum-model.md).
+    /// </summary>
+    private const double SwapSlackPpm = 0.3;
+
+    private static bool PlausibleSwap(PartnerContext context, IReadOnlyList<ShiftPrediction> windows, int judged, int lookAlike, double shift)
+    {
+        if (windows[lookAlike].Window.Widened(SwapSlackPpm).DistanceOutside(shift) > 0) return false;
+        if (TreeSignals.SignalOf(context, lookAlike) is not { } held) return true;
+        // The swap explains nothing when the judged class would break the look-alike's own signal in turn (a class
+        // with two forced partners moved onto the other 'd').
+        if (PatternReading.ImpliedCoupledProtons(held.MultiplicityPattern) is { } impliedThere && TreeSignals.HoldsOnlyClass(context, held, lookAlike)
+            && impliedThere < context.Trees![judged].ForcedPartners)
+        {
+            return false;
+        }
+
+        var other = held.CentrePpm;
+        var asAssigned = Distance(windows[judged], shift) + Distance(windows[lookAlike], other);
+        var swapped = Distance(windows[lookAlike], shift) + Distance(windows[judged], other);
+        return swapped <= asAssigned + SwapSlackPpm;
+    }
+
+    private static double Distance(ShiftPrediction prediction, double shift) => Math.Abs(shift - prediction.Window.MostLikely);
+
     private static bool AllFirstOrder(PartnerContext context, double shift, List<CouplingLink> forced)
     {
+        var frequency = context.Spectrum.FrequencyMHz is { } stated and > 0 ? stated : AssumedFrequencyMHz;
         foreach (var link in forced)
         {
-            if (TreeSignals.ShiftOf(context, link.PartnerClass) is not { } other || Math.Abs(other - shift) < SecondOrderPpm) return false;
+            if (TreeSignals.DistanceTo(context, link.PartnerClass, shift) is not { } apart) return false;
+            var typicalJ = (link.Range.LowHz + link.Range.HighHz) / 2;
+            if (apart * frequency < StrongCouplingRatio * typicalJ) return false;
         }
 
         return true;

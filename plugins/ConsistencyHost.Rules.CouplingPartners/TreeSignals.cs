@@ -1,5 +1,6 @@
 using ConsistencyHost.Spectra.Analysis.Assignment;
 using ConsistencyHost.Spectra.Analysis.Interpretation;
+using ConsistencyHost.Spectra.Model;
 
 namespace ConsistencyHost.Rules.CouplingPartners;
 
@@ -26,8 +27,37 @@ internal static class TreeSignals
         }
     }
 
+    /// <summary>True when <paramref name="signal"/> holds <paramref name="structureClass"/> and no other class.</summary>
+    public static bool HoldsOnlyClass(PartnerContext context, Signal signal, int structureClass)
+    {
+        var interpretation = context.Interpretation!;
+        var assignment = interpretation.Assignment!;
+        for (var k = 0; k < context.CompoundSignals.Count; k++)
+        {
+            if (!ReferenceEquals(context.Spectrum.Signals[context.CompoundSignals[k]], signal)) continue;
+            var held = assignment.ClassesBySignal[k];
+            return held.Count == 1 && interpretation.Classes[held[0]].Source == structureClass;
+        }
+
+        return false;
+    }
+
     /// <summary>The centre shift of the signal holding structure class <paramref name="structureClass"/>; null when none holds it.</summary>
-    public static double? ShiftOf(PartnerContext context, int structureClass)
+    public static double? ShiftOf(PartnerContext context, int structureClass) => SignalOf(context, structureClass)?.CentrePpm;
+
+    /// <summary>
+    /// How far (ppm) the signal holding <paramref name="structureClass"/> lies from <paramref name="shift"/>: from
+    /// its nearest end when it is a reported range; null when no signal holds the class.
+    /// </summary>
+    public static double? DistanceTo(PartnerContext context, int structureClass, double shift)
+    {
+        if (SignalOf(context, structureClass) is not { } signal) return null;
+        var (low, high) = (signal.RangeLowPpm ?? signal.CentrePpm, signal.RangeHighPpm ?? signal.CentrePpm);
+        return shift < low ? low - shift : shift > high ? shift - high : 0;
+    }
+
+    /// <summary>The signal holding structure class <paramref name="structureClass"/>; null when none holds it.</summary>
+    public static Signal? SignalOf(PartnerContext context, int structureClass)
     {
         var interpretation = context.Interpretation!;
         var assignment = interpretation.Assignment!;
@@ -35,7 +65,7 @@ internal static class TreeSignals
         {
             foreach (var c in assignment.ClassesBySignal[k])
             {
-                if (interpretation.Classes[c].Source == structureClass) return context.Spectrum.Signals[context.CompoundSignals[k]].CentrePpm;
+                if (interpretation.Classes[c].Source == structureClass) return context.Spectrum.Signals[context.CompoundSignals[k]];
             }
         }
 

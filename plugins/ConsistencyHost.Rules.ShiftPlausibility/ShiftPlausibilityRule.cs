@@ -68,12 +68,7 @@ public sealed class ShiftPlausibilityRule : Rule<ShiftPlausibilityOptions>
     /// <summary>13C lines judged: all but another species' lines and lines on the solvent's own residual line.</summary>
     private static List<int> CompoundLines(Spectrum spectrum)
     {
-        var onSolvent = new bool[spectrum.Signals.Count];
-        foreach (var match in new ResidualMatcher().Match(spectrum).Matches)
-        {
-            if (match.Kind == ResidualMatchKind.ResidualSolvent) onSolvent[match.SignalIndex] = true;
-        }
-
+        var onSolvent = new ResidualMatcher().OnSolventLine(spectrum);
         var counted = new List<int>(spectrum.Signals.Count);
         for (var s = 0; s < spectrum.Signals.Count; s++)
         {

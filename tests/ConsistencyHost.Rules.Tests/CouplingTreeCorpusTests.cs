@@ -57,17 +57,21 @@ public sealed partial class CouplingTreeCorpusTests(ITestOutputHelper output)
         }
 
         foreach (var line in missed) output.WriteLine("missed " + line);
-        output.WriteLine($"caught {caught} of {seeded} seeded fewer-line faults");
+        output.WriteLine($"caught {caught} of {seeded} seeded fewer-line faults on wholly read entries");
         Assert.True(seeded >= 30, "too few faults seeded to measure");
         Assert.True(caught > 0);
     }
 
-    /// <summary>The report of an entry as published; null for the texts the intake does not read (PDF text-layer headers such as "dH").</summary>
+    /// <summary>
+    /// The report of an entry as published; null for the texts the intake does not read whole (PDF text-layer glyphs
+    /// such as "J ¼ 6:4 Hz" leave a list partly read, which is not a fair test of the patterns).
+    /// </summary>
     private static Engine.Reports.CheckReport? Readable(PublishedSiEntry entry)
     {
         try
         {
-            return BuiltInRules.Check(entry.Smiles, entry.Text).AllRulesRan();
+            var report = BuiltInRules.Check(entry.Smiles, entry.Text).AllRulesRan();
+            return report.Findings.Any(f => f.Finding.Code == "text-unreadable") ? null : report;
         }
         catch (Engine.Intake.EntryInputException)
         {

@@ -23,7 +23,7 @@ public sealed class EntryAnalysis
         ArgumentNullException.ThrowIfNull(spectra);
         Spectra = spectra;
         Perception = perception;
-        _protons = [.. spectra.Select(s => new Lazy<ProtonInterpretation?>(() => InterpretProtons(s, perception), LazyThreadSafetyMode.ExecutionAndPublication))];
+        _protons = [.. spectra.Select(s => new Lazy<ProtonInterpretation?>(() => InterpretProtons(s), LazyThreadSafetyMode.ExecutionAndPublication))];
         _couplings = new Lazy<IReadOnlyList<CouplingTree>?>(() => BuildCouplings(perception), LazyThreadSafetyMode.ExecutionAndPublication);
     }
 
@@ -64,8 +64,10 @@ public sealed class EntryAnalysis
     private static IReadOnlyList<CouplingTree>? BuildCouplings(StructurePerception? perception) =>
         perception is null ? null : CouplingTreeBuilder.Build(perception.Prediction, perception.Equivalence);
 
-    private static ProtonInterpretation? InterpretProtons(Spectrum spectrum, StructurePerception? perception) =>
-        spectrum.Nucleus == Nucleus.H1 && perception is not null
-            ? ProtonInterpreter.Interpret(spectrum, perception.Molecule, perception.Equivalence)
+    // The class windows in the spectrum's solvent let the solver prefer, among equally good readings, the one
+    // whose shifts fit (shared with the rules that read the windows themselves).
+    private ProtonInterpretation? InterpretProtons(Spectrum spectrum) =>
+        spectrum.Nucleus == Nucleus.H1 && Perception is { } perception
+            ? ProtonInterpreter.Interpret(spectrum, perception.Molecule, perception.Equivalence, hydrogenWindows: ShiftsIn(spectrum.Solvent)!.Hydrogen)
             : null;
 }

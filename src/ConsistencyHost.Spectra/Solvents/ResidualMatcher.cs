@@ -22,12 +22,11 @@ public sealed class ResidualMatcher(ResidualMatchOptions? options = null)
     public ResidualMatchResult Match(Nucleus nucleus, string? solvent, IReadOnlyList<Signal> signals)
     {
         var name = SolventNames.Normalise(solvent);
-        var lines = ResidualSolventTable.For(name, nucleus).ToList();
-        if (name is null || lines.Count == 0) return new ResidualMatchResult { SolventKnown = false };
+        if (name is null || SolventRows.For(name, nucleus) is not { } rows) return new ResidualMatchResult { SolventKnown = false };
         var matches = new List<ResidualMatch>();
         var evidence = new List<ImpurityEvidence>();
-        for (var i = 0; i < signals.Count; i++) MatchSolventLines(i, signals[i], lines, name, matches);
-        foreach (var impurity in ImpurityTable.All) MatchImpurity(impurity, name, nucleus, signals, matches, evidence);
+        for (var i = 0; i < signals.Count; i++) MatchSolventLines(i, signals[i], rows.Lines, name, matches);
+        foreach (var impurity in rows.Impurities) MatchImpurity(impurity, nucleus, signals, matches, evidence);
         return new ResidualMatchResult
         {
             SolventKnown = true,
@@ -36,7 +35,28 @@ public sealed class ResidualMatcher(ResidualMatchOptions? options = null)
         };
     }
 
-    private void MatchSolventLines(int index, Signal signal, List<ResidualSolventLine> lines, string solvent, List<ResidualMatch> into)
+    /// <summary>
+    /// The signals of <paramref name="spectrum"/> on the residual line of its own solvent (not water, not
+    /// impurities): what a rule that judges only the compound's lines leaves out.
+    /// </summary>
+    public bool[] OnSolventLine(Spectrum spectrum)
+    {
+        ArgumentNullException.ThrowIfNull(spectrum);
+        var on = new bool[spectrum.Signals.Count];
+        var name = SolventNames.Normalise(spectrum.Solvent);
+        if (name is null || SolventRows.For(name, spectrum.Nucleus) is not { } rows) return on;
+        for (var i = 0; i < on.Length; i++)
+        {
+            foreach (var line in rows.Lines)
+            {
+                if (line.Kind == SolventLineKind.Residual && Deviation(spectrum.Signals[i], line.ShiftPpm, WindowFor(line, name)) is not null) on[i] = true;
+            }
+        }
+
+        return on;
+    }
+
+    private void MatchSolventLines(int index, Signal signal, ResidualSolventLine[] lines, string solvent, List<ResidualMatch> into)
     {
         foreach (var line in lines)
         {
@@ -56,27 +76,24 @@ public sealed class ResidualMatcher(ResidualMatchOptions? options = null)
         return options.WideWaterSolvents.Contains(solvent) ? options.WideWaterWindowPpm : options.WaterWindowPpm;
     }
 
-    private void MatchImpurity(Impurity impurity, string solvent, Nucleus nucleus, IReadOnlyList<Signal> signals,
+    private void MatchImpurity(SolventRows.ImpurityRows impurity, Nucleus nucleus, IReadOnlyList<Signal> signals,
         List<ResidualMatch> into, List<ImpurityEvidence> evidence)
     {
-        var tabulated = 0;
+        var tabulated = impurity.Shifts.Length;
         var matched = 0;
-        foreach (var group in impurity.Groups)
+        foreach (var (group, shift) in impurity.Shifts)
         {
-            var shift = group.Shifts.FirstOrDefault(s => s.Solvent == solvent && s.Nucleus == nucleus);
-            if (shift is null) continue;
-            tabulated++;
             var window = nucleus == Nucleus.C13 ? options.CarbonWindowPpm : group.Exchangeable ? options.WaterWindowPpm : options.ProtonWindowPpm;
             var hit = false;
             for (var i = 0; i < signals.Count; i++)
             {
                 if (Deviation(signals[i], shift.Ppm, window) is not { } deviation) continue;
-                into.Add(new ResidualMatch(i, ResidualMatchKind.Impurity, impurity.Name, group.Label, shift.Ppm, deviation, shift.Source));
+                into.Add(new ResidualMatch(i, ResidualMatchKind.Impurity, impurity.Impurity.Name, group.Label, shift.Ppm, deviation, shift.Source));
                 hit = true;
             }
             if (hit) matched++;
         }
-        if (matched > 0) evidence.Add(new ImpurityEvidence(impurity, matched, tabulated, matched >= options.MinimumImpurityGroups));
+        if (matched > 0) evidence.Add(new ImpurityEvidence(impurity.Impurity, matched, tabulated, matched >= options.MinimumImpurityGroups));
     }
 
     /// <summary>Signed deviation when the signal lies within the window of <paramref name="reference"/>; null otherwise.</summary>

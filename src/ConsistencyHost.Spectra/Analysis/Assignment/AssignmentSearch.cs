@@ -13,6 +13,8 @@ internal sealed class AssignmentSearch
     private readonly double[] _pattern;     // per signal: worst pattern cost among its classes
     private readonly int[] _remainingAfter; // protons of classes at order positions >= i
     private readonly double[,] _patternCost; // per class and signal, computed once
+    private readonly double[,]? _shiftCost;  // per class and signal: how poorly the predicted shift fits (search order only)
+    private readonly bool[,] _identical;      // per signal pair: same count, pattern and shift fit for every class
     private readonly int[][] _candidates;    // per order position: reusable candidate buffer (signals + Missing)
     private int[]? _bestChoice;
     private double _bestCost;
@@ -24,8 +26,10 @@ internal sealed class AssignmentSearch
     /// <param name="signals">The signals.</param>
     /// <param name="options">Weights and budget.</param>
     /// <param name="upperBound">Only assignments cheaper than this are of interest (a better one is known elsewhere).</param>
-    public AssignmentSearch(IReadOnlyList<ClassInput> classes, IReadOnlyList<SignalInput> signals, AssignmentOptions options, double upperBound)
+    /// <param name="shiftCost">Optional per class and signal shift misfit: among equally cheap signals, the better fit is tried first.</param>
+    public AssignmentSearch(IReadOnlyList<ClassInput> classes, IReadOnlyList<SignalInput> signals, AssignmentOptions options, double upperBound, double[,]? shiftCost = null)
     {
+        _shiftCost = shiftCost;
         _classes = classes;
         _signals = signals;
         _options = options;
@@ -36,11 +40,14 @@ internal sealed class AssignmentSearch
             for (var s = 0; s < signals.Count; s++) _patternCost[c, s] = PatternCost.Of(classes[c], signals[s], options);
         }
 
+        _identical = Identical(signals, shiftCost, classes.Count);
         _candidates = [.. Enumerable.Range(0, classes.Count).Select(_ => new int[signals.Count + 1])];
-        // Largest first; interchangeable classes next to each other so that their ordering constraint applies.
+        // Largest first; interchangeable classes next to each other so that their ordering constraint applies (the
+        // later of two takes a signal no earlier than the former's), and among them the one whose shift fits an
+        // earlier signal first, so that the constraint agrees with the shifts.
         _order = [.. Enumerable.Range(0, classes.Count)
             .OrderByDescending(i => classes[i].Size).ThenBy(i => classes[i].IsExchangeable)
-            .ThenBy(i => classes[i].TypicalCoupledProtons).ThenBy(i => classes[i].MaxCoupledProtons).ThenBy(i => i)];
+            .ThenBy(i => classes[i].TypicalCoupledProtons).ThenBy(i => classes[i].MaxCoupledProtons).ThenBy(BestSignal).ThenBy(i => i)];
         _choice = new int[classes.Count];
         _filled = new int[signals.Count];
         _members = new int[signals.Count];
@@ -107,7 +114,7 @@ internal sealed class AssignmentSearch
         {
             if (_filled[s] + size > _signals[s].ProtonCount || (_members[s] == 0 && HasIdenticalEarlierEmpty(s, floor))) continue;
             var at = fitting++;
-            while (at > 0 && _patternCost[current, buffer[at - 1]] > _patternCost[current, s])
+            while (at > 0 && TriedLater(current, buffer[at - 1], s))
             {
                 buffer[at] = buffer[at - 1];
                 at--;
@@ -126,11 +133,52 @@ internal sealed class AssignmentSearch
         return count;
     }
 
+    /// <summary>
+    /// Which signals are the same to the search: equal count and pattern and, with shifts, equal fit for every class
+    /// (two 2 H doublets at different shifts are not interchangeable once shifts order the search).
+    /// </summary>
+    private static bool[,] Identical(IReadOnlyList<SignalInput> signals, double[,]? shiftCost, int classCount)
+    {
+        var identical = new bool[signals.Count, signals.Count];
+        for (var a = 0; a < signals.Count; a++)
+        {
+            for (var b = 0; b < signals.Count; b++)
+            {
+                var same = signals[a] == signals[b];
+                for (var c = 0; same && shiftCost is not null && c < classCount; c++) same = shiftCost[c, a] == shiftCost[c, b];
+                identical[a, b] = same;
+            }
+        }
+
+        return identical;
+    }
+
+    /// <summary>True when signal <paramref name="placed"/> should come after <paramref name="candidate"/>: a worse pattern, or an equal one and a worse shift.</summary>
+    private bool TriedLater(int current, int placed, int candidate)
+    {
+        var (a, b) = (_patternCost[current, placed], _patternCost[current, candidate]);
+        if (a != b) return a > b;
+        return _shiftCost is not null && _shiftCost[current, placed] > _shiftCost[current, candidate];
+    }
+
+    /// <summary>The signal the class's predicted shift fits best (0 without shifts).</summary>
+    private int BestSignal(int cls)
+    {
+        if (_shiftCost is null) return 0;
+        var best = 0;
+        for (var s = 1; s < _signals.Count; s++)
+        {
+            if (_shiftCost[cls, s] < _shiftCost[cls, best]) best = s;
+        }
+
+        return best;
+    }
+
     private bool HasIdenticalEarlierEmpty(int signal, int floor)
     {
         for (var s = floor; s < signal; s++)
         {
-            if (_members[s] == 0 && _signals[s] == _signals[signal]) return true;
+            if (_members[s] == 0 && _identical[s, signal]) return true;
         }
 
         return false;

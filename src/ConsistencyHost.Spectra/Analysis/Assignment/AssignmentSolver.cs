@@ -18,11 +18,21 @@ public static class AssignmentSolver
     /// that cannot beat one already found is pruned early). When none is cheaper, the result has an infinite
     /// cost and is not consistent.
     /// </summary>
-    public static AssignmentResult Solve(IReadOnlyList<ClassInput> classes, IReadOnlyList<SignalInput> signals, AssignmentOptions? options, double upperBound)
+    public static AssignmentResult Solve(IReadOnlyList<ClassInput> classes, IReadOnlyList<SignalInput> signals, AssignmentOptions? options, double upperBound) =>
+        Solve(classes, signals, options, upperBound, null);
+
+    /// <summary>
+    /// As <see cref="Solve(IReadOnlyList{ClassInput}, IReadOnlyList{SignalInput}, AssignmentOptions?, double)"/>, trying
+    /// first, among equally good places for a class, the signal its predicted shift fits best
+    /// (<paramref name="shiftCost"/>[class, signal], lower is better). The cost the search minimises is unchanged:
+    /// shifts only order the search, so the first of several equally good assignments found is the shift-plausible
+    /// one (then <see cref="ShiftPreference.Refine"/> mends what the order alone missed).
+    /// </summary>
+    public static AssignmentResult Solve(IReadOnlyList<ClassInput> classes, IReadOnlyList<SignalInput> signals, AssignmentOptions? options, double upperBound, double[,]? shiftCost)
     {
         ArgumentNullException.ThrowIfNull(classes);
         ArgumentNullException.ThrowIfNull(signals);
-        var search = new AssignmentSearch(classes, signals, options ?? AssignmentOptions.Default, upperBound);
+        var search = new AssignmentSearch(classes, signals, options ?? AssignmentOptions.Default, upperBound, shiftCost);
         return search.Run();
     }
 }

@@ -1,6 +1,7 @@
 using ConsistencyHost.Chemistry.Model;
 using ConsistencyHost.Chemistry.Perception.Symmetry;
 using ConsistencyHost.Spectra.Analysis.Assignment;
+using ConsistencyHost.Spectra.Analysis.Prediction;
 using ConsistencyHost.Spectra.Model;
 using ConsistencyHost.Spectra.Solvents;
 
@@ -14,7 +15,17 @@ namespace ConsistencyHost.Spectra.Analysis.Interpretation;
 public static class ProtonInterpreter
 {
     /// <summary>Interprets <paramref name="spectrum"/> for <paramref name="molecule"/>.</summary>
-    public static ProtonInterpretation Interpret(Spectrum spectrum, Molecule molecule, NmrEquivalence equivalence, ResidualMatchOptions? matchOptions = null)
+    /// <param name="spectrum">The 1H list.</param>
+    /// <param name="molecule">The structure.</param>
+    /// <param name="equivalence">Its perceived classes.</param>
+    /// <param name="matchOptions">Residual windows (defaults when null).</param>
+    /// <param name="hydrogenWindows">
+    /// The predicted window of each hydrogen class (in class order) in the spectrum's solvent: among assignments
+    /// equal on counts and patterns, the one whose shifts fit them best is kept (<see cref="ShiftPreference"/>).
+    /// Null: the solver's first choice stands.
+    /// </param>
+    public static ProtonInterpretation Interpret(Spectrum spectrum, Molecule molecule, NmrEquivalence equivalence, ResidualMatchOptions? matchOptions = null,
+        IReadOnlyList<ShiftPrediction>? hydrogenWindows = null)
     {
         ArgumentNullException.ThrowIfNull(spectrum);
         var fast = ClassInputs.From(equivalence);
@@ -25,18 +36,24 @@ public static class ProtonInterpreter
         var stated = RotamerShares.Summed(spectrum.Signals, rotamerPairs);
         var candidates = Candidates(residuals, spectrum.Signals, molecule, minor, stated);
         var (counts, fit) = ProtonCounts(spectrum.Signals, stated, minor, fast);
-        var best = Choose(spectrum.Signals, counts, minor, candidates, fast);
+        var best = Choose(spectrum.Signals, counts, minor, candidates, fast, hydrogenWindows);
         var classes = fast;
         if (splits.Count > 0 && !IsPerfect(best))
         {
             // Slow amide rotation is a second reading of the structure; it must explain the data strictly better.
             var slow = ClassInputs.Split(fast, splits.Select(s => s.ClassIndex));
-            var slowBest = Choose(spectrum.Signals, counts, minor, candidates, slow, best.Cost);
+            var slowBest = Choose(spectrum.Signals, counts, minor, candidates, slow, hydrogenWindows, best.Cost);
             if (slowBest.Cost < best.Cost - 1e-9)
             {
                 (best, classes) = (slowBest, slow);
             }
         }
+        var assignment = best.Assignment;
+        if (assignment is not null && best.Inputs is { } inputs && best.ShiftCost is { } misfit)
+        {
+            assignment = ShiftPreference.Refine(classes, inputs, assignment, (c, k) => misfit[c, k]);
+        }
+
         var roles = new SignalRole[spectrum.Signals.Count];
         for (var i = 0; i < roles.Length; i++)
         {
@@ -49,7 +66,7 @@ public static class ProtonInterpreter
             ProtonCounts = counts,
             CompoundSignals = best.Kept,
             Classes = classes,
-            Assignment = best.Assignment,
+            Assignment = assignment,
             IntegralFit = fit,
             Residuals = residuals,
             SlowAmideRotation = !ReferenceEquals(classes, fast),
@@ -109,10 +126,11 @@ public static class ProtonInterpreter
         return (counts, fit);
     }
 
-    private sealed record Reading(List<int> Kept, Dictionary<int, SignalRole> Removed, AssignmentResult? Assignment, double Cost);
+    private sealed record Reading(List<int> Kept, Dictionary<int, SignalRole> Removed, AssignmentResult? Assignment, double Cost,
+        List<SignalInput>? Inputs = null, double[,]? ShiftCost = null);
 
     private static Reading Choose(IReadOnlyList<Signal> signals, int?[] counts, bool[] minor, Dictionary<int, SignalRole> candidates, IReadOnlyList<ClassInput> classes,
-        double bound = double.PositiveInfinity)
+        IReadOnlyList<ShiftPrediction>? windows, double bound = double.PositiveInfinity)
     {
         // Fewest removed first, so that a later reading must be strictly cheaper to win and its search can be
         // bounded by the best cost so far.
@@ -126,7 +144,7 @@ public static class ProtonInterpreter
         Reading? best = null;
         foreach (var removed in options)
         {
-            var reading = Evaluate(signals, counts, minor, removed, classes, Math.Min(bound, best?.Cost ?? double.PositiveInfinity));
+            var reading = Evaluate(signals, counts, minor, removed, classes, windows, Math.Min(bound, best?.Cost ?? double.PositiveInfinity));
             if (best is null || reading.Cost < best.Cost - 1e-9 || (Math.Abs(reading.Cost - best.Cost) <= 1e-9 && reading.Removed.Count < best.Removed.Count))
             {
                 best = reading;
@@ -144,7 +162,8 @@ public static class ProtonInterpreter
     /// <summary>Zero cost with every signal kept: the best any reading can be (costs are non-negative).</summary>
     private static bool IsPerfect(Reading reading) => reading.Cost <= 0 && reading.Removed.Count == 0;
 
-    private static Reading Evaluate(IReadOnlyList<Signal> signals, int?[] counts, bool[] minor, Dictionary<int, SignalRole> removed, IReadOnlyList<ClassInput> classes, double bound)
+    private static Reading Evaluate(IReadOnlyList<Signal> signals, int?[] counts, bool[] minor, Dictionary<int, SignalRole> removed, IReadOnlyList<ClassInput> classes,
+        IReadOnlyList<ShiftPrediction>? windows, double bound)
     {
         var kept = Enumerable.Range(0, signals.Count).Where(i => !minor[i] && !removed.ContainsKey(i)).ToList();
         if (kept.Any(i => counts[i] is null))
@@ -156,7 +175,8 @@ public static class ProtonInterpreter
         }
 
         var inputs = kept.Select(i => new SignalInput(counts[i]!.Value, PatternReading.ImpliedCoupledProtons(signals[i].MultiplicityPattern))).ToList();
-        var assignment = AssignmentSolver.Solve(classes, inputs, null, bound);
-        return new Reading(kept, removed, assignment, assignment.Cost);
+        var shiftCost = windows is null ? null : ShiftFit.Matrix(classes, signals, kept, windows);
+        var assignment = AssignmentSolver.Solve(classes, inputs, null, bound, shiftCost);
+        return new Reading(kept, removed, assignment, assignment.Cost, inputs, shiftCost);
     }
 }
