@@ -13,5 +13,5 @@ public static class ConfiguredValue
     public const int MaxShown = 80;
 
     /// <summary>"'value'" or "'first 80 characters… (cut, N characters in all)'".</summary>
-    public static string Quote(string? text) => $"'{ReportLimits.Cut(text ?? "", MaxShown)}'";
+    public static string Quote(string? text) => $"'{TextCut.Cut(text ?? "", MaxShown)}'";
 }

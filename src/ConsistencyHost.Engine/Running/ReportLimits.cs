@@ -100,8 +100,7 @@ public sealed record ReportLimits
         || finding.Evidence.Any(e => e.Key.Length > MaxMessageChars || e.Value.Length > MaxMessageChars);
 
     /// <summary>Cuts text to <paramref name="max"/> characters, saying how long it was.</summary>
-    public static string Cut(string text, int max) =>
-        text.Length <= max ? text : $"{text[..max]}… (cut, {text.Length} characters in all)";
+    public static string Cut(string text, int max) => TextCut.Cut(text, max);
 
     /// <summary>An upper bound of the finding's size on the wire (UTF-8 text, fixed-size numbers, field tags).</summary>
     private static long SizeOf(Finding finding)
