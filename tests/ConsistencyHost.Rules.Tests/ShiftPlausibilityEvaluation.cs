@@ -13,13 +13,6 @@ public sealed class ShiftPlausibilityEvaluation(ITestOutputHelper output)
 {
     private const string RuleId = "shift-plausibility";
 
-    // The rule is opt-in (built into artifacts/optional-plugins, not among the built-in plugins): an engine of its own.
-    private static readonly Lazy<ConsistencyHost.Engine.CheckEngine> Engine = new(() => new(new ConsistencyHost.Engine.EngineOptions
-    {
-        PluginsPath = Path.Combine(ConsistencyHost.Tests.Shared.RepoPaths.Root, "artifacts", "optional-plugins"),
-        RuleDeadline = TimeSpan.FromSeconds(30),
-    }));
-
     [Fact]
     public void PublishedEntriesAndIsomers_Figures()
     {
@@ -57,7 +50,7 @@ public sealed class ShiftPlausibilityEvaluation(ITestOutputHelper output)
     // counted as not read: a partly read list is not a fair test of the windows.
     private static List<Finding>? Findings(string smiles, string text)
     {
-        var report = Engine.Value.Check(new ConsistencyHost.Engine.Intake.EntrySubmission
+        var report = BuiltInRules.Engine.Check(new ConsistencyHost.Engine.Intake.EntrySubmission
         {
             EntryId = "AIS-LQ-EVAL",
             Structure = new ConsistencyHost.Sdk.Entries.StructureSource(ConsistencyHost.Sdk.Entries.StructureFormat.Smiles, smiles),
