@@ -87,35 +87,37 @@ public sealed class ShiftPlausibilityRule : Rule<ShiftPlausibilityOptions>
     {
         var bySignal = new Dictionary<int, IReadOnlyList<int>>();
         if (interpretation.Assignment is not { } assignment) return bySignal;
-        var twinSources = new List<int>?[interpretation.Classes.Count];
+        var twins = TwinSources(interpretation.Classes);
         for (var k = 0; k < interpretation.CompoundSignals.Count && k < assignment.ClassesBySignal.Count; k++)
         {
-            var sources = new List<int>();
-            foreach (var input in assignment.ClassesBySignal[k])
-            {
-                foreach (var source in twinSources[input] ??= TwinSources(interpretation.Classes, input))
-                {
-                    if (!sources.Contains(source)) sources.Add(source);
-                }
-            }
-
-            sources.Sort();
-            if (sources.Count > 0) bySignal[interpretation.CompoundSignals[k]] = sources;
+            var held = assignment.ClassesBySignal[k];
+            if (held.Count == 0) continue;
+            var sources = new SortedSet<int>();
+            foreach (var input in held) sources.UnionWith(twins[input]);
+            if (sources.Count > 0) bySignal[interpretation.CompoundSignals[k]] = [.. sources];
         }
 
         return bySignal;
     }
 
-    /// <summary>The structure classes behind every solver input interchangeable with input <paramref name="input"/> (itself included).</summary>
-    private static List<int> TwinSources(IReadOnlyList<ClassInput> classes, int input)
+    /// <summary>
+    /// For each solver input, the structure classes behind every input interchangeable with it (itself included):
+    /// one pass grouping the inputs by what the solver sees of them.
+    /// </summary>
+    private static List<int>[] TwinSources(IReadOnlyList<ClassInput> classes)
     {
-        var sources = new List<int>();
-        foreach (var twin in classes)
+        var groups = new Dictionary<(int, bool, int, int), List<int>>();
+        var result = new List<int>[classes.Count];
+        for (var i = 0; i < classes.Count; i++)
         {
-            if (twin.Source >= 0 && classes[input].IsInterchangeableWith(twin) && !sources.Contains(twin.Source)) sources.Add(twin.Source);
+            var c = classes[i];
+            var key = (c.Size, c.IsExchangeable, c.TypicalCoupledProtons, c.MaxCoupledProtons);
+            if (!groups.TryGetValue(key, out var group)) groups[key] = group = [];
+            if (c.Source >= 0 && !group.Contains(c.Source)) group.Add(c.Source);
+            result[i] = group;
         }
 
-        return sources;
+        return result;
     }
 
     /// <summary>"C4,C7": each atom once, in first-seen order.</summary>

@@ -13,13 +13,6 @@ public sealed class ShiftPlausibilityEvaluation(ITestOutputHelper output)
 {
     private const string RuleId = "shift-plausibility";
 
-    // The rule is opt-in (built into artifacts/optional-plugins, not among the built-in plugins): an engine of its own.
-    private static readonly Lazy<ConsistencyHost.Engine.CheckEngine> Engine = new(() => new(new ConsistencyHost.Engine.EngineOptions
-    {
-        PluginsPath = Path.Combine(ConsistencyHost.Tests.Shared.RepoPaths.Root, "artifacts", "optional-plugins"),
-        RuleDeadline = TimeSpan.FromSeconds(30),
-    }));
-
     [Fact]
     public void PublishedEntriesAndIsomers_Figures()
     {
@@ -45,9 +38,13 @@ public sealed class ShiftPlausibilityEvaluation(ITestOutputHelper output)
         var usable = isomers.Where(c => !flaggedClean.Contains(c[0]) && !unreadable.Contains(c[0])).ToList();
         var caught = usable.Count(c => Findings(c[1], entries[c[0]].Text)?.Any(f => f.Severity >= Severity.Warning) == true);
         var judged = usable.Count;
+        // The same isomers against every built-in rule: caught when the isomer draws a warning or error (rule and
+        // code) that the drawn structure does not (coupling trees, counts and windows together).
+        var caughtByAny = usable.Count(c => WarningCodes(c[1], entries[c[0]].Text).Except(WarningCodes(entries[c[0]].Smiles, entries[c[0]].Text)).Any());
         var read = entries.Count - unreadable.Count;
         output.WriteLine($"entries: {entries.Count}; read: {read}; false error: {falseErrors.Count}; false warning: {falseWarnings.Count} ({100.0 * falseWarnings.Count / read:0.0}%)");
         output.WriteLine($"isomers judged (entry itself clean): {judged}; caught (warning or error): {caught} ({100.0 * caught / Math.Max(1, judged):0.0}%)");
+        output.WriteLine($"isomers caught by any built-in rule (a warning or error the drawn structure does not draw): {caughtByAny} ({100.0 * caughtByAny / Math.Max(1, judged):0.0}%)");
         foreach (var line in falseErrors.Concat(falseWarnings)) output.WriteLine(line);
         Assert.True(entries.Count > 200, "fixture read");
         Assert.True(falseErrors.Count == 0, string.Join("\n", falseErrors));
@@ -57,7 +54,7 @@ public sealed class ShiftPlausibilityEvaluation(ITestOutputHelper output)
     // counted as not read: a partly read list is not a fair test of the windows.
     private static List<Finding>? Findings(string smiles, string text)
     {
-        var report = Engine.Value.Check(new ConsistencyHost.Engine.Intake.EntrySubmission
+        var report = BuiltInRules.Engine.Check(new ConsistencyHost.Engine.Intake.EntrySubmission
         {
             EntryId = "AIS-LQ-EVAL",
             Structure = new ConsistencyHost.Sdk.Entries.StructureSource(ConsistencyHost.Sdk.Entries.StructureFormat.Smiles, smiles),
@@ -66,6 +63,13 @@ public sealed class ShiftPlausibilityEvaluation(ITestOutputHelper output)
         if (report.Findings.Any(f => f.Finding.Code == "text-unreadable")) return null;
         return [.. report.Findings.Where(f => f.RuleId == RuleId).Select(f => f.Finding)];
     }
+
+    private static HashSet<string> WarningCodes(string smiles, string text) =>
+    [
+        .. BuiltInRules.Check(smiles, text).Findings
+            .Where(f => f.Finding.Severity >= Severity.Warning && f.RuleId != "reported-text")
+            .Select(f => f.RuleId + "/" + f.Finding.Code),
+    ];
 
     private static IEnumerable<string[]> Rows(string file) =>
         File.ReadLines(Path.Combine(AppContext.BaseDirectory, "Fixtures", file))

@@ -51,7 +51,7 @@ public sealed class PublishedImageTests
             var plugins = body.GetProperty("checks").EnumerateArray().Single(c => c.GetProperty("name").GetString() == "plugins");
             Assert.Equal("Healthy", plugins.GetProperty("status").GetString());
             Assert.Equal(
-                ["coupling-partners", "integral-ratio", "mass-formula", "signal-count", "solvent-residual", "spectrum-metadata"],
+                ["coupling-partners", "integral-ratio", "mass-formula", "shift-plausibility", "signal-count", "solvent-residual", "spectrum-metadata"],
                 plugins.GetProperty("data").EnumerateObject().Select(p => p.Name).Order(StringComparer.Ordinal));
         }
         finally

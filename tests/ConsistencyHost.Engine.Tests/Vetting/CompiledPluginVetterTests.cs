@@ -234,7 +234,7 @@ public sealed class CompiledPluginVetterTests
 
     public static TheoryData<string> BuiltPlugins() =>
     [
-        .. new[] { "plugins", "optional-plugins", "sample-plugins" }
+        .. new[] { "plugins", "sample-plugins" }
             .Select(drop => Path.Combine(ConsistencyHost.Tests.Shared.RepoPaths.Root, "artifacts", drop))
             .Where(Directory.Exists)
             .SelectMany(Directory.EnumerateDirectories)
@@ -245,9 +245,9 @@ public sealed class CompiledPluginVetterTests
 
     [Theory]
     [MemberData(nameof(BuiltPlugins))]
-    public void Vet_EveryBuiltInOptionalAndSamplePlugin_PassesTheAllowList(string relativePath)
+    public void Vet_EveryBuiltInAndSamplePlugin_PassesTheAllowList(string relativePath)
     {
-        // The built-in rules (regular-expression generator output included), the opt-in rule and the sample lab's
+        // The built-in rules (regular-expression generator output included) and the sample lab's
         // plugin as the build dropped them: the allow-list must not refuse what the repository ships.
         var result = CompiledPluginVetter.Default.Vet(Path.Combine(ConsistencyHost.Tests.Shared.RepoPaths.Root, relativePath));
 

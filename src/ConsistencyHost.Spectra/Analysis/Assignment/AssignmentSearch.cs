@@ -224,27 +224,38 @@ internal sealed class AssignmentSearch
 
     private AssignmentResult Result()
     {
-        var choice = _bestChoice ?? Enumerable.Repeat(Missing, _classes.Count).ToArray();
-        var bySignal = Enumerable.Range(0, _signals.Count).Select(_ => new List<int>()).ToList();
+        var bySignal = new List<int>[_signals.Count];
+        for (var s = 0; s < bySignal.Length; s++) bySignal[s] = [];
         var missing = new List<int>();
-        for (var c = 0; c < choice.Length; c++)
+        for (var c = 0; c < _classes.Count; c++)
         {
-            if (choice[c] == Missing) missing.Add(c);
-            else bySignal[choice[c]].Add(c);
+            var signal = _bestChoice?[c] ?? Missing;
+            if (signal == Missing) missing.Add(c);
+            else bySignal[signal].Add(c);
         }
 
         var cost = _bestChoice is null ? double.PositiveInfinity : _bestCost;
         var consistent = _bestChoice is not null && IsConsistent(bySignal, missing);
-        return new AssignmentResult([.. bySignal.Select(l => (IReadOnlyList<int>)l)], missing, cost, consistent, _nodes <= _options.NodeBudget);
+        return new AssignmentResult(bySignal, missing, cost, consistent, _nodes <= _options.NodeBudget);
     }
 
-    private bool IsConsistent(List<List<int>> bySignal, List<int> missing)
+    private bool IsConsistent(List<int>[] bySignal, List<int> missing)
     {
-        if (missing.Any(c => !_classes[c].IsExchangeable)) return false;
-        for (var s = 0; s < bySignal.Count; s++)
+        foreach (var c in missing)
         {
-            if (bySignal[s].Sum(c => _classes[c].Size) != _signals[s].ProtonCount) return false;
-            if (bySignal[s].Any(c => PatternCost.Of(_classes[c], _signals[s], _options) >= _options.ImpossiblePatternCost)) return false;
+            if (!_classes[c].IsExchangeable) return false;
+        }
+
+        for (var s = 0; s < bySignal.Length; s++)
+        {
+            var protons = 0;
+            foreach (var c in bySignal[s])
+            {
+                protons += _classes[c].Size;
+                if (_patternCost[c, s] >= _options.ImpossiblePatternCost) return false;
+            }
+
+            if (protons != _signals[s].ProtonCount) return false;
         }
 
         return true;

@@ -16,6 +16,8 @@ namespace ConsistencyHost.Spectra.Analysis.Interpretation;
 /// </remarks>
 public static class SameCompound
 {
+    // Each tabulated SMILES is read and summarised once per process; most submitted structures differ in atom
+    // count from every tabulated solvent, so the formula is computed only when the counts agree.
     private static readonly ConcurrentDictionary<string, Molecule?> Parsed = new(StringComparer.Ordinal);
 
     /// <summary>True when <paramref name="molecule"/> is the compound written as <paramref name="smiles"/>.</summary>
@@ -25,6 +27,7 @@ public static class SameCompound
         if (smiles is null) return false;
         var other = Parsed.GetOrAdd(smiles, s => SmilesReader.Read(s).Value);
         return other is not null
+               && other.AtomCount == molecule.AtomCount
                && MolecularFormula.Of(molecule).Hill == MolecularFormula.Of(other).Hill
                && Signature(molecule).SequenceEqual(Signature(other));
     }
