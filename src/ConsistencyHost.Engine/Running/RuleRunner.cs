@@ -88,8 +88,10 @@ public sealed class RuleRunner(IRuleExecutor? isolated = null, ReportLimits? lim
         var token = deadline.Token;
         // The deadline and the clock start when the rule starts, not when it is queued: on a busy host a task
         // can wait seconds for a pool thread, and that wait is not the rule's doing. The clock stops when the
-        // rule returns, so a rule awaited after a slow one reports its own time.
-        var task = Task.Run(() =>
+        // rule returns, so a rule awaited after a slow one reports its own time. Each such run gets a thread of its
+        // own (LongRunning) rather than a pool thread: the caller blocks waiting for it, and under load (a fresh-clone
+        // CI run, 5 Dec 2026) the pool did not grow fast enough, so a 1 ms rule "did not get a thread" in 10 s.
+        var task = Task.Factory.StartNew(() =>
         {
             try
             {
@@ -107,7 +109,7 @@ public sealed class RuleRunner(IRuleExecutor? isolated = null, ReportLimits? lim
             {
                 clock.Stop();
             }
-        }, CancellationToken.None);
+        }, CancellationToken.None, TaskCreationOptions.LongRunning, TaskScheduler.Default);
         return new StartedRun(task, deadline, clock, null, null, began);
     }
 
@@ -189,7 +191,7 @@ public sealed class RuleRunner(IRuleExecutor? isolated = null, ReportLimits? lim
 
         if (run.Task!.IsFaulted && run.Task.Exception!.GetBaseException() is OperationCanceledException && deadline.IsCancellationRequested)
         {
-            // The rule observed its token when the deadline fired (Task.Run with no token reports that as a fault).
+            // The rule observed its token when the deadline fired (a task started without the token reports that as a fault).
             return (new RuleRunRecord(id, version, RuleRunStatus.TimedOut, elapsed, $"overran its deadline of {rule.Deadline.TotalMilliseconds:0} ms", 0), []);
         }
 
