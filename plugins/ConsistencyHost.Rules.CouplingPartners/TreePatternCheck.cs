@@ -10,7 +10,7 @@ namespace ConsistencyHost.Rules.CouplingPartners;
 /// <summary>
 /// The lower side of the n+1 check: a first-order pattern with fewer splittings than the couplings of its
 /// protons that cannot vanish (an OCH2 next to a CH3 reported as a t, an isopropyl CH as a q). Couplings that
-/// may be unresolved (meta, allylic, ring vicinal, to OH/NH) never count, and a partner closer than
+/// may be unresolved (meta, allylic, ring vicinal in a fused or five-membered ring, to OH/NH) never count, and a partner closer than
 /// <see cref="StrongCouplingRatio"/> times the coupling makes the pair second order (A2B2 can look like a singlet), so it is skipped.
 /// </summary>
 internal static class TreePatternCheck
@@ -33,7 +33,7 @@ internal static class TreePatternCheck
             var signal = context.Spectrum.Signals[s];
             if (PatternReading.ImpliedCoupledProtons(signal.MultiplicityPattern) is not { } implied) continue;
             var tree = context.Trees![cls];
-            var forced = tree.Links.Where(l => !l.IsHeteronuclear && !l.Range.MayVanish && l.PartnerClass != cls).ToList();
+            var forced = tree.ForcedLinks.ToList();
             var needed = forced.Sum(l => l.Count);
             if (implied >= needed || AnyLookAlikeAllows(context, cls, implied, signal.CentrePpm) || !AllFirstOrder(context, signal.CentrePpm, forced)) continue;
             yield return Finding(context, s, cls, implied, needed, forced, tree);
@@ -92,6 +92,7 @@ internal static class TreePatternCheck
         var frequency = context.Spectrum.FrequencyMHz is { } stated and > 0 ? stated : AssumedFrequencyMHz;
         foreach (var link in forced)
         {
+            if (link.IsHeteronuclear) continue; // a 19F/31P partner has no 1H shift: its splitting is first order
             if (TreeSignals.DistanceTo(context, link.PartnerClass, shift) is not { } apart) return false;
             var typicalJ = (link.Range.LowHz + link.Range.HighHz) / 2;
             if (apart * frequency < StrongCouplingRatio * typicalJ) return false;
@@ -105,7 +106,7 @@ internal static class TreePatternCheck
         var signal = context.Spectrum.Signals[s];
         var (firstOrder, merged) = tree.ExpectedPattern();
         var expected = merged is null ? $"'{firstOrder}'" : $"'{firstOrder}' (or '{merged}' when the J values are equal)";
-        var types = string.Join(", ", forced.Select(l => $"{l.Count} H {Describe(l.Type)} ({l.Range.LowHz:0.#}–{l.Range.HighHz:0.#} Hz)"));
+        var types = string.Join(", ", forced.Select(l => $"{l.Count} {(l.IsHeteronuclear ? "F/P" : "H")} {Describe(l.Type)} ({l.Range.LowHz:0.#}–{l.Range.HighHz:0.#} Hz)"));
         var text = string.Create(CultureInfo.InvariantCulture,
             $"The signal at {signal.Describe()} is reported as '{signal.Multiplicity}' ({implied} coupled protons), but its protons couple to {types}, couplings that do not vanish: expected {expected}.");
         // A textbook n+1 case (freely rotating vicinal couplings) is an error; aromatic and vinyl patterns can be
@@ -128,6 +129,9 @@ internal static class TreePatternCheck
         CouplingType.VinylTrans => "vinyl trans",
         CouplingType.VinylCisOrTrans => "vinyl",
         CouplingType.GeminalSp3 or CouplingType.GeminalVinyl => "geminal",
+        CouplingType.VicinalRingAveraged => "vicinal (ring, averaged by inversion)",
+        CouplingType.HF3JAromaticOrtho => "H–F ortho",
+        CouplingType.HF2J => "geminal H–F",
         _ => type.ToString(),
     };
 }

@@ -62,6 +62,27 @@ public sealed partial class CouplingTreeCorpusTests(ITestOutputHelper output)
         Assert.True(caught > 0);
     }
 
+    [Theory]
+    // si-069, 4-phenylmorpholine: both ring CH2 reported as t (J 4.47 Hz). The ring inverts fast, so each CH2 couples to
+    // the other with averaged J (Friebolin: Jaa 10-13, Jae/Jee 2-5 average to about 3-4 and 6-8 Hz; neither vanishes).
+    [InlineData("si-069", "3.17 (t,", "3.17 (d,")]
+    // si-012, a 4-fluorophenyl ketone: the H ortho to F is a t (J 8.5 Hz) from one ortho H and the ortho 19F
+    // (Pretsch: aromatic ortho H-F 6-11 Hz, always resolved).
+    [InlineData("si-012", "7.19 (t,", "7.19 (d,")]
+    public void Check_PatternMissingAnAlwaysResolvedCoupling_FlaggedAsTooFewLines(string id, string published, string seeded)
+    {
+        var entry = PublishedSiEntries.All.Single(e => e.Id == id);
+        Assert.Contains(published, entry.Text, StringComparison.Ordinal);
+
+        var asPublished = BuiltInRules.Check(entry.Smiles, entry.Text).AllRulesRan();
+        var withFault = BuiltInRules.Check(entry.Smiles, entry.Text.Replace(published, seeded, StringComparison.Ordinal)).AllRulesRan();
+
+        Assert.DoesNotContain(CouplingCodes.TooFewLines, asPublished.Codes("coupling-partners"));
+        var finding = withFault.Findings.Single(f => f.Finding.Code == CouplingCodes.TooFewLines);
+        Assert.Equal(Sdk.Findings.Severity.Warning, finding.Finding.Severity);
+        Assert.NotEmpty(finding.Finding.Atoms);
+    }
+
     /// <summary>
     /// The report of an entry as published; null for the texts the intake does not read whole (PDF text-layer glyphs
     /// such as "J ¼ 6:4 Hz" leave a list partly read, which is not a fair test of the patterns).

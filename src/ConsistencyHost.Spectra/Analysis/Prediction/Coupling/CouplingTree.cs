@@ -6,11 +6,17 @@ namespace ConsistencyHost.Spectra.Analysis.Prediction.Coupling;
 public sealed record CouplingTree(int ClassIndex, IReadOnlyList<CouplingLink> Links)
 {
     /// <summary>
-    /// Protons of other classes whose coupling cannot vanish: a first-order pattern of this class shows at least
-    /// these splittings (unless the partner's shift is so close that the pair is second order).
+    /// Spin-½ partners whose coupling cannot vanish — protons of other classes, and 19F/31P with a coupling that is
+    /// always resolved (H–C–F, H ortho to F on an arene): a first-order pattern of this class shows at least these
+    /// splittings (unless a proton partner's shift is so close that the pair is second order).
     /// </summary>
     /// <remarks>Computed once: the checks read it for every class of a signal's size, on every signal.</remarks>
-    public int ForcedPartners { get; } = Links.Where(l => !l.IsHeteronuclear && !l.Range.MayVanish && l.PartnerClass != ClassIndex).Sum(l => l.Count);
+    public int ForcedPartners { get; } = Links.Where(IsForced(ClassIndex)).Sum(l => l.Count);
+
+    /// <summary>The links counted in <see cref="ForcedPartners"/>.</summary>
+    public IEnumerable<CouplingLink> ForcedLinks => Links.Where(IsForced(ClassIndex));
+
+    private static Func<CouplingLink, bool> IsForced(int self) => l => !l.Range.MayVanish && l.PartnerClass != self;
 
     /// <summary>Largest |J| any branch allows, Hz (0 for a class with no partners).</summary>
     public double LargestJHz { get; } = Links.Count == 0 ? 0 : Links.Max(l => l.Range.HighHz);
@@ -22,7 +28,7 @@ public sealed record CouplingTree(int ClassIndex, IReadOnlyList<CouplingLink> Li
     /// </summary>
     public (string FirstOrder, string? Merged) ExpectedPattern()
     {
-        var forced = Links.Where(l => !l.IsHeteronuclear && !l.Range.MayVanish && l.PartnerClass != ClassIndex).ToList();
+        var forced = ForcedLinks.ToList();
         if (forced.Count == 0) return ("s", null);
         var letters = string.Concat(forced.OrderByDescending(l => l.Range.HighHz).Select(l => Letters(l.Count + 1)));
         var merged = forced.Count > 1 && forced.Select(l => l.Type).Distinct().Count() == 1 ? Name(forced.Sum(l => l.Count) + 1) : null;

@@ -53,6 +53,7 @@ public static class CouplingTreeBuilder
                 {
                     if (counts[distance] == 0) continue;
                     var type = Type(context, p, firstAtom[distance], distance, group.IsExchangeable || partner.IsExchangeable);
+                    if (type == CouplingType.VicinalRing && FlipAveraged(context, group, partner, p, firstAtom[distance])) type = CouplingType.VicinalRingAveraged;
                     links.Add(new CouplingLink(d, -1, counts[distance], distance + 2, type, JTable.Of(type)));
                 }
             }
@@ -62,10 +63,44 @@ public static class CouplingTreeBuilder
         {
             var bonds = NearDistance(m, p, x) + 1;
             var type = HeteroType(m.Atoms[x].AtomicNumber, bonds);
+            if (type == CouplingType.HF3J && OrthoOnArene(context, p, x)) type = CouplingType.HF3JAromaticOrtho;
             links.Add(new CouplingLink(-1, x, 1, bonds, type, JTable.Of(type)));
         }
 
         return new CouplingTree(c, links);
+    }
+
+    /// <summary>
+    /// True when both carbons are CH2 groups whose two protons fall in one class each, in a ring of six or more
+    /// atoms and in no other ring: the ring inverts fast enough to make its axial and equatorial protons one class,
+    /// so each coupling is an average that cannot vanish. A fused, bridged or five-membered ring keeps its Karplus range.
+    /// </summary>
+    private static bool FlipAveraged(PredictionContext context, HydrogenClass group, HydrogenClass partner, int p, int q)
+    {
+        var m = context.Molecule;
+        if (m.Atoms[p].HydrogenCount != 2 || m.Atoms[q].HydrogenCount != 2) return false;
+        if (Occurrences(group.ParentAtoms, p) != 2 || Occurrences(partner.ParentAtoms, q) != 2) return false;
+        if (SmallestCommonRing(context, p, q) < 6) return false;
+        var ringsOfP = 0;
+        var ringsOfQ = 0;
+        foreach (var ring in context.Rings.Rings)
+        {
+            if (ring.Contains(p)) ringsOfP++;
+            if (ring.Contains(q)) ringsOfQ++;
+        }
+
+        return ringsOfP == 1 && ringsOfQ == 1;
+    }
+
+    private static int Occurrences(System.Collections.Immutable.ImmutableArray<int> atoms, int atom)
+    {
+        var n = 0;
+        foreach (var a in atoms)
+        {
+            if (a == atom) n++;
+        }
+
+        return n;
     }
 
     /// <summary>True when the partner at <paramref name="list"/>[<paramref name="at"/>] already appeared earlier (a class listed twice gets one branch set).</summary>
@@ -143,6 +178,18 @@ public static class CouplingTreeBuilder
         }
 
         return CouplingType.VinylCisOrTrans;
+    }
+
+    /// <summary>True when <paramref name="fluorine"/> sits on an aromatic carbon bonded through the ring to aromatic <paramref name="carbon"/>.</summary>
+    private static bool OrthoOnArene(PredictionContext context, int carbon, int fluorine)
+    {
+        if (!context.IsAromatic(carbon)) return false;
+        foreach (var y in context.Molecule.Neighbours(fluorine))
+        {
+            if (context.IsAromatic(y) && context.Molecule.BondBetween(carbon, y) >= 0 && context.IsAromaticBond(carbon, y)) return true;
+        }
+
+        return false;
     }
 
     private static CouplingType HeteroType(int element, int bonds) => (element, bonds) switch

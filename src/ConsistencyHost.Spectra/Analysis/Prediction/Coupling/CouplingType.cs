@@ -55,4 +55,11 @@ public enum CouplingType
     CF3J,
     /// <summary>13C–19F 4J.</summary>
     CF4J,
+    /// <summary>
+    /// 3J between two ring CH2 groups whose two protons are each one class (a six-membered or larger ring that is
+    /// not fused and inverts fast: morpholine, piperazine, cyclohexanone): the axial and equatorial values average.
+    /// </summary>
+    VicinalRingAveraged,
+    /// <summary>19F on the neighbouring carbon of an aromatic ring (H ortho to F): 3J that is always resolved.</summary>
+    HF3JAromaticOrtho,
 }

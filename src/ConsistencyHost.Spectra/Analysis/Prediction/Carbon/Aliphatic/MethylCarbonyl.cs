@@ -8,7 +8,9 @@ namespace ConsistencyHost.Spectra.Analysis.Prediction.Carbon.Aliphatic;
 /// From memory (Pretsch et al. 2009): acetone 30.9 (Gottlieb 1997: 30.92), 2-butanone 29.4, 3-methyl-2-butanone
 /// 27.4, pinacolone 24.6, acetophenone 26.6, methyl vinyl ketone 26.3, 2-acetylpyridine 25.8, 2,3-butanedione
 /// 23.8, acetylacetone (keto) 30.3, ethyl acetoacetate 30.1, acetaldehyde 31.2. Acetamides: N-alkyl 23.2,
-/// acetanilide 24.5, N,N-dialkyl 21.5, N-methylacetanilide 22.4, acetamide 22.5.
+/// acetanilide 24.5, N,N-dialkyl 21.5, N-methylacetanilide 22.4, acetamide 22.5. Imides (a second acyl on the
+/// nitrogen, which then donates less to each carbonyl) move the acetyl methyl up: diacetamide 24.9,
+/// N,N-diacetylaniline 26.1, 3-acetyl-2-oxazolidinone 23.8, N-acetylpyrrolidin-2-one 24.9.
 /// </remarks>
 internal static class MethylCarbonyl
 {
@@ -50,6 +52,7 @@ internal static class MethylCarbonyl
         var nitrogen = OtherSide(context, methyl, carbonyl);
         var carbons = 0;
         var aryl = false;
+        var acyl = false;
         foreach (var x in m.Neighbours(nitrogen))
         {
             if (x == carbonyl)
@@ -59,6 +62,12 @@ internal static class MethylCarbonyl
 
             carbons++;
             aryl |= context.IsAromatic(x);
+            acyl |= Topology.IsCarbonylCarbon(m, x);
+        }
+
+        if (acyl)
+        {
+            return new(24.9, 2.2, "CH3–C(O)N–C(O) (imide)");
         }
 
         return (carbons, aryl) switch

@@ -11,6 +11,10 @@ namespace ConsistencyHost.Spectra.Analysis.Prediction.Carbon.Aliphatic;
 /// cyclooctane 26.8; oxirane 40.6, aziridine 18.2, thiirane 18.9; oxetane 72.6/22.9; tetrahydrofuran 68.0/25.6
 /// (Gottlieb 1997), pyrrolidine 47.0/25.7; tetrahydropyran 68.6/26.9/23.8, piperidine 47.5/27.2/25.2.
 /// Heterocycle values are averaged over ring positions (their spread, ±1.5 ppm, is in the window).
+/// A five-ring carbon bonded to a fused arene carbon takes its own value, derived the same way from benzo-fused
+/// parents (from memory, SDBS/Pretsch): indane C-1 32.9, 2,3-dihydrobenzofuran C-3 29.8, indoline C-3 29.9, 1-indanone
+/// C-3 25.8 against sums of 33.7, 33.4, 34.9 and 27.9: −0.8 to −5.0, mean −2.9. The cyclopentane value (−8.9) would
+/// put indane C-1 near 25 ppm, because the aryl increment already carries the ring's own atoms.
 /// </remarks>
 internal static class RingCorrections
 {
@@ -27,6 +31,12 @@ internal static class RingCorrections
         7 => -1.3,
         _ => -3.0,
     };
+
+    /// <summary>The correction for a five-ring carbon bonded to an arene carbon of the same ring (benzo-fused, benzylic).</summary>
+    public const double FusedFiveRingBenzylic = -2.9;
+
+    /// <summary>The label of <see cref="FusedFiveRingBenzylic"/>.</summary>
+    public const string FusedFiveRingBenzylicLabel = "5-ring fused to an arene";
 
     /// <summary>The label of the correction.</summary>
     public static string Label(int size) => size switch

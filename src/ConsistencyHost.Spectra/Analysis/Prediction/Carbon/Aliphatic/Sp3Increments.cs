@@ -27,9 +27,37 @@ internal static class Sp3Increments
         Sp3Corrections.Add(context, carbon, estimate);
         var rings = RingFacts.Of(context);
         var size = rings.SmallestSize[carbon];
-        estimate.AddNonZero(RingCorrections.Label(size), RingCorrections.Of(size, rings.SmallestRingHetero[carbon]));
+        if (size == 5 && BondedToAreneInRing(context, carbon, rings.SmallestRingIndex[carbon]))
+        {
+            estimate.Add(RingCorrections.FusedFiveRingBenzylicLabel, RingCorrections.FusedFiveRingBenzylic);
+        }
+        else
+        {
+            estimate.AddNonZero(RingCorrections.Label(size), RingCorrections.Of(size, rings.SmallestRingHetero[carbon]));
+        }
+
         HalfWidth(context, carbon, estimate, tally, rings);
         return estimate.Build(ShiftBasis.Increments, "substituents (increment error)", context.Molecule.Degree(carbon));
+    }
+
+    /// <summary>True when a neighbour of <paramref name="carbon"/> in ring <paramref name="ring"/> is aromatic.</summary>
+    private static bool BondedToAreneInRing(PredictionContext context, int carbon, int ring)
+    {
+        if (ring < 0)
+        {
+            return false;
+        }
+
+        var atoms = context.Rings.Rings[ring];
+        foreach (var x in context.Molecule.Neighbours(carbon))
+        {
+            if (context.IsAromatic(x) && atoms.Contains(x))
+            {
+                return true;
+            }
+        }
+
+        return false;
     }
 
     private static Tally Walk(PredictionContext context, int carbon, CarbonEstimate estimate)

@@ -68,6 +68,7 @@ internal static class AromaticSubstituentSum
 
         estimate.Widen(RingCrowding.Of(context, carbon));
         OrthoDonors.Apply(context, carbon, estimate);
+        BenzoFusedFiveRing.Apply(context, carbon, estimate);
         return count;
     }
 
