@@ -61,11 +61,14 @@ public sealed record IsolationOptions
     public bool IsolateNetwork { get; init; } = true;
 
     /// <summary>
-    /// The user (and group) id workers run as, through <c>setpriv</c>. Null runs them as the host's user. When
-    /// the host runs as root the default is 65534 ("nobody" on Debian): a worker then cannot read the host's
-    /// files or signal it. A host that does not run as root cannot switch users, and workers share its user.
+    /// The user ids workers run under, one each (the group id is the same number), through <c>setpriv</c>: different
+    /// uids keep workers from signalling, tracing or reading one another and the host. Needs a host that runs as root
+    /// (or holds the capabilities <see cref="WorkerUsers"/> names); elsewhere untrusted plugins are refused.
     /// </summary>
-    public int? WorkerUserId { get; init; } = Environment.IsPrivilegedProcess && File.Exists(WorkerCommand.Setpriv) ? 65534 : null;
+    public UidRange WorkerUids { get; init; } = UidRange.Default;
+
+    /// <summary>Give workers a read-only view of the file system except their private folder, where this host can (<see cref="ReadOnlyView"/>).</summary>
+    public bool ReadOnlyFileSystem { get; init; } = true;
 
     /// <summary>The clock for the crash window.</summary>
     public TimeProvider Clock { get; init; } = TimeProvider.System;
