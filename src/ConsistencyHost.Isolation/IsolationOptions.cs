@@ -51,6 +51,13 @@ public sealed record IsolationOptions
     /// <summary>Open file descriptors a worker may hold (RLIMIT_NOFILE); Kestrel and the runtime need a few dozen.</summary>
     public int OpenFiles { get; init; } = 256;
 
+    /// <summary>
+    /// Tasks (processes and threads) a worker's uid may have (RLIMIT_NPROC via prlimit). The kernel counts them per
+    /// uid, and each plugin has a uid of its own, so this bounds one plugin's fork or thread bomb without counting
+    /// other workers. A worker runs about thirty threads (the runtime, Kestrel, the thread pool); Roslyn a few more.
+    /// </summary>
+    public int Processes { get; init; } = 512;
+
     /// <summary>Worker losses (crashes and overrun kills) within <see cref="CrashWindow"/> that quarantine a plugin.</summary>
     public int CrashLimit { get; init; } = 3;
 

@@ -38,7 +38,7 @@ internal static class WorkerCommand
         var command = new List<string>();
         if (File.Exists(Prlimit))
         {
-            command.AddRange([Prlimit, $"--as={options.AddressSpaceBytes}", $"--nofile={options.OpenFiles}", "--core=0"]);
+            command.AddRange([Prlimit, $"--as={options.AddressSpaceBytes}", $"--nofile={options.OpenFiles}", $"--nproc={options.Processes}", "--core=0"]);
         }
 
         var network = options.IsolateNetwork && NetworkNamespace.Arguments is { } unshare ? unshare : [];
