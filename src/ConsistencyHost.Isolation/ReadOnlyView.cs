@@ -15,14 +15,15 @@ internal static class ReadOnlyView
     /// <summary>
     /// $1 is the private folder, the rest the command to exec. mountinfo(5): field 5 is the mount point (blanks as
     /// octal escapes, which printf %b undoes), field 6 its per-mount options ("rw,nosuid,nodev,relatime"), kept
-    /// with rw turned into ro. Any mount that cannot be remounted stops the worker (set -e): no partial view.
+    /// with rw turned into ro. One awk and one mount per mount point, nothing else forked: each process start costs
+    /// tens of milliseconds on a loaded machine. Any mount that cannot be remounted stops the worker (set -e): no
+    /// partial view.
     /// </summary>
     private const string Script = """
         set -eu
         dir=$1; shift
-        awk '{print $5, $6}' /proc/self/mountinfo | while read -r point options; do
-          point=$(printf '%b' "$point")
-          options=$(printf '%s' "$options" | sed 's/^rw\(,\|$\)/ro\1/')
+        awk '{ sub(/^rw/, "ro", $6); print $6, $5 }' /proc/self/mountinfo | while read -r options point; do
+          case $point in *\\*) point=$(printf '%b' "$point") ;; esac
           mount -o "remount,bind,$options" "$point"
         done
         mount --bind "$dir" "$dir"
