@@ -51,6 +51,13 @@ public sealed record IsolationOptions
     /// <summary>Open file descriptors a worker may hold (RLIMIT_NOFILE); Kestrel and the runtime need a few dozen.</summary>
     public int OpenFiles { get; init; } = 256;
 
+    /// <summary>
+    /// Tasks (processes and threads) a worker's uid may have (RLIMIT_NPROC via prlimit). The kernel counts them per
+    /// uid, and each plugin has a uid of its own, so this bounds one plugin's fork or thread bomb without counting
+    /// other workers. A worker runs about thirty threads (the runtime, Kestrel, the thread pool); Roslyn a few more.
+    /// </summary>
+    public int Processes { get; init; } = 512;
+
     /// <summary>Worker losses (crashes and overrun kills) within <see cref="CrashWindow"/> that quarantine a plugin.</summary>
     public int CrashLimit { get; init; } = 3;
 
@@ -61,11 +68,14 @@ public sealed record IsolationOptions
     public bool IsolateNetwork { get; init; } = true;
 
     /// <summary>
-    /// The user (and group) id workers run as, through <c>setpriv</c>. Null runs them as the host's user. When
-    /// the host runs as root the default is 65534 ("nobody" on Debian): a worker then cannot read the host's
-    /// files or signal it. A host that does not run as root cannot switch users, and workers share its user.
+    /// The user ids workers run under, one each (the group id is the same number), through <c>setpriv</c>: different
+    /// uids keep workers from signalling, tracing or reading one another and the host. Needs a host that runs as root
+    /// (or holds the capabilities <see cref="WorkerUsers"/> names); elsewhere untrusted plugins are refused.
     /// </summary>
-    public int? WorkerUserId { get; init; } = Environment.IsPrivilegedProcess && File.Exists(WorkerCommand.Setpriv) ? 65534 : null;
+    public UidRange WorkerUids { get; init; } = UidRange.Default;
+
+    /// <summary>Give workers a read-only view of the file system except their private folder, where this host can (<see cref="ReadOnlyView"/>).</summary>
+    public bool ReadOnlyFileSystem { get; init; } = true;
 
     /// <summary>The clock for the crash window.</summary>
     public TimeProvider Clock { get; init; } = TimeProvider.System;

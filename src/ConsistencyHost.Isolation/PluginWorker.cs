@@ -12,12 +12,14 @@ namespace ConsistencyHost.Isolation;
 
 /// <summary>
 /// The worker of one plugin: started on first use, one call at a time (an overrun kills the process, and
-/// with it anything else it was doing), restarted on the next use after it dies.
+/// with it anything else it was doing), restarted on the next use after it dies. Every worker of the plugin runs
+/// under the one uid the plugin was given on its first start, which no other plugin's worker shares.
 /// </summary>
-internal sealed class PluginWorker(string pluginAssembly, IsolationOptions options, CrashLedger ledger) : IAsyncDisposable
+internal sealed class PluginWorker(string pluginAssembly, IsolationOptions options, CrashLedger ledger, WorkerUsers users) : IAsyncDisposable
 {
     private readonly SemaphoreSlim _gate = new(1, 1);
     private WorkerProcess? _worker;
+    private int? _uid;
     private bool _disposed;
 
     public async Task<ExecutorResult> RunAsync(ActiveRule rule, CheckEntryRequest entry, CancellationToken cancellationToken)
@@ -81,7 +83,8 @@ internal sealed class PluginWorker(string pluginAssembly, IsolationOptions optio
     {
         if (_worker is { HasExited: false } running) return running;
         await StopWorkerAsync();
-        _worker = await WorkerProcess.StartAsync(options, pluginAssembly, cancellationToken);
+        _uid ??= users.Next();
+        _worker = await WorkerProcess.StartAsync(options, _uid.Value, pluginAssembly, cancellationToken);
         return _worker;
     }
 

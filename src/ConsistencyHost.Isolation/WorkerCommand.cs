@@ -4,24 +4,28 @@ using System.Globalization;
 namespace ConsistencyHost.Isolation;
 
 /// <summary>
-/// The command line and environment a worker starts with: <c>prlimit</c> for resource limits, <c>unshare --net</c>
-/// for an empty network namespace, <c>setpriv</c> to drop to an unprivileged user, then <c>dotnet</c> with the worker; an environment of only what .NET needs.
+/// The command line and environment a worker starts with: <c>prlimit</c> for resource limits, <c>unshare --net --mount</c>
+/// for an empty network namespace and a read-only view of the file system (<see cref="ReadOnlyView"/>), <c>setpriv</c>
+/// to drop to the worker's own unprivileged uid, then <c>dotnet</c> with the worker; an environment of only what .NET needs.
 /// Each wrapper execs the next, so the worker is the host's direct child and inherits its standard input.
 /// </summary>
 internal static class WorkerCommand
 {
     private const string Prlimit = "/usr/bin/prlimit";
-    private const string Unshare = "/usr/bin/unshare";
+    public const string Unshare = "/usr/bin/unshare";
 
     /// <summary>util-linux setpriv: drops to another user and sets no_new_privs before exec.</summary>
     public const string Setpriv = "/usr/bin/setpriv";
 
     /// <summary>A rule worker serving one plugin on a Unix socket.</summary>
-    public static ProcessStartInfo Build(IsolationOptions options, string pluginAssembly, string privateDirectory, string socketPath) =>
-        Build(options, ["--plugin", pluginAssembly, "--socket", socketPath], privateDirectory, options.ManagedHeapBytes);
+    public static ProcessStartInfo Build(IsolationOptions options, int uid, string pluginAssembly, string privateDirectory, string socketPath) =>
+        Build(options, uid, ["--plugin", pluginAssembly, "--socket", socketPath], privateDirectory, options.ManagedHeapBytes);
 
-    /// <summary>The worker program with <paramref name="workerArguments"/>, under every limit and confinement available here.</summary>
-    public static ProcessStartInfo Build(IsolationOptions options, IReadOnlyList<string> workerArguments, string privateDirectory, long managedHeapBytes)
+    /// <summary>
+    /// The worker program with <paramref name="workerArguments"/> as <paramref name="uid"/> (from <see cref="WorkerUsers"/>:
+    /// never the host's), under every limit and confinement available here.
+    /// </summary>
+    public static ProcessStartInfo Build(IsolationOptions options, int uid, IReadOnlyList<string> workerArguments, string privateDirectory, long managedHeapBytes)
     {
         var start = new ProcessStartInfo
         {
@@ -34,18 +38,18 @@ internal static class WorkerCommand
         var command = new List<string>();
         if (File.Exists(Prlimit))
         {
-            command.AddRange([Prlimit, $"--as={options.AddressSpaceBytes}", $"--nofile={options.OpenFiles}", "--core=0"]);
+            command.AddRange([Prlimit, $"--as={options.AddressSpaceBytes}", $"--nofile={options.OpenFiles}", $"--nproc={options.Processes}", "--core=0"]);
         }
 
-        if (options.IsolateNetwork && NetworkNamespace.Arguments is { } unshare)
+        var network = options.IsolateNetwork && NetworkNamespace.Arguments is { } unshare ? unshare : [];
+        var readOnly = options.ReadOnlyFileSystem && ReadOnlyView.Available;
+        if (network.Length > 0 || readOnly)
         {
-            command.AddRange([Unshare, .. unshare]);
+            command.AddRange([Unshare, .. network, .. readOnly ? ["--mount"] : Array.Empty<string>()]);
         }
 
-        if (options.WorkerUserId is { } user)
-        {
-            command.AddRange([Setpriv, $"--reuid={user}", $"--regid={user}", "--clear-groups", "--no-new-privs"]);
-        }
+        if (readOnly) command.AddRange(ReadOnlyView.Step(privateDirectory));
+        command.AddRange([Setpriv, .. SwitchUser(uid)]);
 
         command.AddRange([DotnetMuxer.Path, options.WorkerAssemblyPath, .. workerArguments]);
         start.FileName = command[0];
@@ -53,6 +57,10 @@ internal static class WorkerCommand
         SetEnvironment(start, privateDirectory, managedHeapBytes);
         return start;
     }
+
+    /// <summary>setpriv's arguments for running as <paramref name="uid"/> (and the group of that number), no supplementary groups, no way back up.</summary>
+    public static string[] SwitchUser(int uid) =>
+        [$"--reuid={uid}", $"--regid={uid}", "--clear-groups", "--no-new-privs"];
 
     /// <summary>Nothing of the host's environment (API keys, connection strings) reaches the plugin.</summary>
     private static void SetEnvironment(ProcessStartInfo start, string privateDirectory, long managedHeapBytes)

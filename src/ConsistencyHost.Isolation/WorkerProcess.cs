@@ -11,8 +11,9 @@ using Grpc.Net.Client;
 namespace ConsistencyHost.Isolation;
 
 /// <summary>
-/// One running worker: the child process, its private 0700 folder with the socket, and a channel that sends
-/// the launch secret on every call. Killing it kills the whole process tree and removes the folder.
+/// One running worker: the child process under its own uid, its private 0700 folder (owned by that uid) with the
+/// socket, and a channel that sends the launch secret on every call. Only the worker's uid and the host (root's
+/// CAP_DAC_OVERRIDE) can enter the folder, so no other worker can reach the socket. Killing it kills the whole process tree and removes the folder.
 /// </summary>
 internal sealed class WorkerProcess : IAsyncDisposable
 {
@@ -37,11 +38,11 @@ internal sealed class WorkerProcess : IAsyncDisposable
     public bool HasExited => _process.HasExited;
 
     /// <summary>Starts a worker for one plugin and waits for its handshake; throws <see cref="WorkerStartException"/>.</summary>
-    public static async Task<WorkerProcess> StartAsync(IsolationOptions options, string pluginAssembly, CancellationToken cancellationToken)
+    public static async Task<WorkerProcess> StartAsync(IsolationOptions options, int uid, string pluginAssembly, CancellationToken cancellationToken)
     {
-        var directory = CreatePrivateDirectory(options);
+        var directory = CreatePrivateDirectory(uid);
         var socket = Path.Combine(directory, "worker.sock");
-        var process = Process.Start(WorkerCommand.Build(options, pluginAssembly, directory, socket))
+        var process = Process.Start(WorkerCommand.Build(options, uid, pluginAssembly, directory, socket))
                       ?? throw new WorkerStartException("the worker process could not be started");
         var stderr = new StderrTail(process);
         var secret = Convert.ToHexString(RandomNumberGenerator.GetBytes(32));
@@ -82,8 +83,8 @@ internal sealed class WorkerProcess : IAsyncDisposable
         _ => $"the worker did not start: {error.Message}",
     };
 
-    /// <summary>A fresh 0700 folder owned by the worker's user: its working, home and temporary folder.</summary>
-    internal static string CreatePrivateDirectory(IsolationOptions options)
+    /// <summary>A fresh 0700 folder owned by the worker's uid: its working, home and temporary folder.</summary>
+    internal static string CreatePrivateDirectory(int uid)
     {
         var directory = Directory.CreateTempSubdirectory("ch-worker-").FullName;
         // CreateTempSubdirectory already makes it 0700 on Unix; set it explicitly, as the socket's only guard
@@ -91,7 +92,7 @@ internal sealed class WorkerProcess : IAsyncDisposable
         if (!OperatingSystem.IsWindows())
         {
             File.SetUnixFileMode(directory, UnixFileMode.UserRead | UnixFileMode.UserWrite | UnixFileMode.UserExecute);
-            if (options.WorkerUserId is { } user) FileOwner.Change(directory, user);
+            FileOwner.Change(directory, uid);
         }
 
         return directory;

@@ -19,13 +19,15 @@ public sealed class WorkerRuleExecutor : IRuleExecutor, IAsyncDisposable, IDispo
     private readonly CrashLedger _ledger;
     private readonly ConcurrentDictionary<string, PluginWorker> _workers = new(StringComparer.Ordinal);
     private readonly WorkerSourceCompiler _compiler;
+    private readonly WorkerUsers _users;
 
     /// <summary>Creates the executor; workers start on first use.</summary>
     public WorkerRuleExecutor(IsolationOptions? options = null)
     {
         _options = options ?? new IsolationOptions();
         _ledger = new CrashLedger(_options);
-        _compiler = new WorkerSourceCompiler(_options);
+        _users = new WorkerUsers(_options.WorkerUids);
+        _compiler = new WorkerSourceCompiler(_options, _users);
         if (!File.Exists(_options.WorkerAssemblyPath))
         {
             throw new FileNotFoundException($"the rule worker is not at '{_options.WorkerAssemblyPath}'; build src/ConsistencyHost.Worker", _options.WorkerAssemblyPath);
@@ -35,20 +37,27 @@ public sealed class WorkerRuleExecutor : IRuleExecutor, IAsyncDisposable, IDispo
     /// <summary>True when workers run without network (a fresh network namespace could be created here).</summary>
     public bool NetworkIsolated => _options.IsolateNetwork && NetworkNamespace.Arguments is not null;
 
+    /// <summary>True when workers see the file system read-only except their private folder (a mount namespace could be set up here).</summary>
+    public bool FileSystemReadOnly => _options.ReadOnlyFileSystem && ReadOnlyView.Available;
+
+    /// <inheritdoc />
+    /// <remarks>Set when this host cannot run each worker under a uid of its own (<see cref="WorkerUsers"/>).</remarks>
+    public string? UnavailableReason => _users.UnavailableReason;
+
     /// <inheritdoc />
     public TimeSpan Overhead => _options.StartTimeout * 2 + _options.DeadlineGrace + TimeSpan.FromSeconds(15);
 
     /// <inheritdoc />
     public Task<ExecutorResult> RunAsync(ActiveRule rule, EntrySubmission submission, CancellationToken cancellationToken)
     {
-        var worker = _workers.GetOrAdd(rule.Descriptor.AssemblyPath, path => new PluginWorker(path, _options, _ledger));
+        var worker = _workers.GetOrAdd(rule.Descriptor.AssemblyPath, path => new PluginWorker(path, _options, _ledger, _users));
         return worker.RunAsync(rule, RequestMapper.ToRequest(submission), cancellationToken);
     }
 
     /// <inheritdoc />
     public async Task<IReadOnlyList<RuleDescriptor>> DescribeAsync(string assemblyPath, string plugin, IReadOnlyList<Profile> profiles, CancellationToken cancellationToken)
     {
-        var worker = _workers.GetOrAdd(assemblyPath, path => new PluginWorker(path, _options, _ledger));
+        var worker = _workers.GetOrAdd(assemblyPath, path => new PluginWorker(path, _options, _ledger, _users));
         try
         {
             var response = await worker.DescribeAsync(WorkerDescriptions.Request(profiles), cancellationToken);

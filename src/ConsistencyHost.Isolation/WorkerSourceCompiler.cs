@@ -6,12 +6,12 @@ namespace ConsistencyHost.Isolation;
 
 /// <summary>
 /// Compiles a source plugin in a one-shot worker process (<c>ConsistencyHost.Worker --compile NAME</c>) under the
-/// workers' confinement (no network, the workers' user, a clean environment, RLIMIT_AS) with its own managed heap
+/// workers' confinement (no network, a uid of its own from the workers' range, a clean environment, RLIMIT_AS) with its own managed heap
 /// limit (<see cref="IsolationOptions.CompileHeapBytes"/>) and wall-time limit (<see cref="IsolationOptions.CompileTimeout"/>).
 /// Whatever the compiler does — throw, abort out of memory, loop — the host gets a refusal naming what happened and
 /// the limit, and carries on with its other plugins. The image that comes back is vetted by the host.
 /// </summary>
-internal sealed class WorkerSourceCompiler(IsolationOptions options) : ISourceCompilation
+internal sealed class WorkerSourceCompiler(IsolationOptions options, WorkerUsers users) : ISourceCompilation
 {
     /// <summary>
     /// The largest reply read from the compiler: a base64 image of a plugin whose sources are at most
@@ -27,11 +27,22 @@ internal sealed class WorkerSourceCompiler(IsolationOptions options) : ISourceCo
 
     private async Task<SourceImage> CompileAsync(string assemblyName, IReadOnlyList<SourceFile> sources)
     {
-        var directory = WorkerProcess.CreatePrivateDirectory(options);
+        int uid;
+        try
+        {
+            // A fresh uid per compilation: hostile source never compiles under the host's uid or a running worker's.
+            uid = users.Next();
+        }
+        catch (WorkerStartException error)
+        {
+            return Failed(error.Message);
+        }
+
+        var directory = WorkerProcess.CreatePrivateDirectory(uid);
         Process? process = null;
         try
         {
-            process = Process.Start(WorkerCommand.Build(options, ["--compile", assemblyName], directory, options.CompileHeapBytes));
+            process = Process.Start(WorkerCommand.Build(options, uid, ["--compile", assemblyName], directory, options.CompileHeapBytes));
             if (process is null) return Failed("could not be started");
             var stderr = new StderrTail(process);
             using var limit = new CancellationTokenSource(options.CompileTimeout);

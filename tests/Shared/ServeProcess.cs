@@ -25,10 +25,18 @@ internal sealed class ServeProcess : IDisposable
 
     public bool HasExited => _process.HasExited;
 
-    public static async Task<ServeProcess> StartAsync(string[]? extraArgs = null, IReadOnlyDictionary<string, string>? environment = null)
+    /// <summary>The host's process id (after <paramref name="launcher"/>'s exec, the host itself).</summary>
+    public int ProcessId => _process.Id;
+
+    /// <param name="extraArgs">More <c>serve</c> arguments.</param>
+    /// <param name="environment">Environment variables to set for the host.</param>
+    /// <param name="launcher">A command that execs the host, e.g. <c>setpriv --reuid=…</c> to run it as another user; none by default.</param>
+    public static async Task<ServeProcess> StartAsync(string[]? extraArgs = null, IReadOnlyDictionary<string, string>? environment = null,
+        IReadOnlyList<string>? launcher = null)
     {
-        var start = new ProcessStartInfo("dotnet") { RedirectStandardOutput = true, RedirectStandardError = true, WorkingDirectory = RepoPaths.Cli };
-        foreach (var arg in new[] { Path.Combine(RepoPaths.Cli, "consistencyhost.dll"), "serve", "--port", "0", "--http-port", "0" }.Concat(extraArgs ?? []))
+        string[] command = [.. launcher ?? [], "dotnet", Path.Combine(RepoPaths.Cli, "consistencyhost.dll"), "serve", "--port", "0", "--http-port", "0", .. extraArgs ?? []];
+        var start = new ProcessStartInfo(command[0]) { RedirectStandardOutput = true, RedirectStandardError = true, WorkingDirectory = RepoPaths.Cli };
+        foreach (var arg in command.Skip(1))
         {
             start.ArgumentList.Add(arg);
         }

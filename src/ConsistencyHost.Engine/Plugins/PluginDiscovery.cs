@@ -37,10 +37,22 @@ public static class PluginDiscovery
         var compiler = new SourcePluginCompiler(sourceCacheRoot ?? SourcePluginCompiler.DefaultCacheRoot, untrusted?.SourceCompilation);
         var found = new List<RuleDescriptor>();
         var described = new List<Task<IReadOnlyList<RuleDescriptor>>>();
+        var unavailable = untrusted?.RefusalReason;
         foreach (var candidate in candidates)
         {
+            if (unavailable is not null && candidate.SourceFolder is { } sourceFolder)
+            {
+                // A source plugin is never trusted: not even its compiler runs where workers cannot be isolated.
+                found.Add(Refused(Path.GetFileName(sourceFolder) + SourceSuffix, unavailable, Path.GetFileName(sourceFolder)));
+                continue;
+            }
+
             var vetted = candidate.SourceFolder is { } folder ? CompileSource(folder, compiler) : VetCompiled(candidate.AssemblyPath!, candidate.Vetted);
-            if (vetted.Refusal is { } refusal)
+            if (vetted.Refusal is null && unavailable is not null && !untrusted!.IsTrusted(vetted.Plugin))
+            {
+                found.Add(Refused(vetted.Plugin, unavailable));
+            }
+            else if (vetted.Refusal is { } refusal)
             {
                 found.Add(refusal);
             }

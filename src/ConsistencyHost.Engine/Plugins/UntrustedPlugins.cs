@@ -19,6 +19,14 @@ public sealed class UntrustedPlugins(Func<string, bool> isTrusted, IRuleExecutor
     /// <summary>Where source plugins compile: the executor's bounded place (a worker process), or null for in-process.</summary>
     internal Vetting.ISourceCompilation? SourceCompilation => executor.SourceCompilation;
 
+    /// <summary>
+    /// Why untrusted plugins cannot run here at all (<see cref="IRuleExecutor.UnavailableReason"/>), or null. Each is
+    /// then refused with it — never loaded in the host, never run less isolated.
+    /// </summary>
+    internal string? RefusalReason => executor.UnavailableReason is { } reason
+        ? $"untrusted plugins run only in isolated workers, and this host cannot start them: {reason}; the plugin was not run"
+        : null;
+
     /// <summary>True when the plugin loads in the host; a source plugin never does.</summary>
     internal bool IsTrusted(string plugin) => !PluginDiscovery.IsSourcePlugin(plugin) && isTrusted(PluginDiscovery.PluginName(plugin));
 

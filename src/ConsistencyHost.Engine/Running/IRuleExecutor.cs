@@ -45,6 +45,13 @@ public interface IRuleExecutor
     /// </summary>
     Vetting.ISourceCompilation? SourceCompilation => null;
 
+    /// <summary>
+    /// Why this executor cannot run untrusted plugins on this machine with the isolation it promises (e.g. the host
+    /// cannot give workers a uid of their own), naming what is missing; null when it can. Discovery then refuses every
+    /// untrusted plugin with this reason instead of running it any less isolated. Null by default.
+    /// </summary>
+    string? UnavailableReason => null;
+
     /// <summary>Why the rule is currently held back (its plugin is quarantined), or null when it can run.</summary>
     string? HeldBackReason(RuleDescriptor rule);
 

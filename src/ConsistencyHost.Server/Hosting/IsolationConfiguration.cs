@@ -9,11 +9,11 @@ namespace ConsistencyHost.Server.Hosting;
 /// </summary>
 /// <example>
 /// <code>"Isolation": { "Enabled": true, "CrashLimit": 3, "CrashWindowMinutes": 5, "ManagedHeapMegabytes": 256, "IsolateNetwork": true,
-/// "CompileTimeoutSeconds": 60, "CompileHeapMegabytes": 768 }</code>
+/// "CompileTimeoutSeconds": 60, "CompileHeapMegabytes": 768, "WorkerUidRange": "700000000-700009999", "ReadOnlyFileSystem": true }</code>
 /// </example>
 public static class IsolationConfiguration
 {
-    private static readonly string[] Keys = ["Enabled", "CrashLimit", "CrashWindowMinutes", "ManagedHeapMegabytes", "IsolateNetwork", "WorkerPath", "CompileTimeoutSeconds", "CompileHeapMegabytes"];
+    private static readonly string[] Keys = ["Enabled", "CrashLimit", "CrashWindowMinutes", "ManagedHeapMegabytes", "IsolateNetwork", "WorkerPath", "CompileTimeoutSeconds", "CompileHeapMegabytes", "WorkerUidRange", "ReadOnlyFileSystem"];
 
     /// <summary>
     /// The executor, or null when "Enabled" is false (every rule then runs in-process, as in the engine's
@@ -37,6 +37,8 @@ public static class IsolationConfiguration
             CompileTimeout = TimeSpan.FromSeconds(Read(section, "CompileTimeoutSeconds", defaults.CompileTimeout.TotalSeconds, v => v is >= 1 and <= 3600, problems)),
             CompileHeapBytes = Read(section, "CompileHeapMegabytes", defaults.CompileHeapBytes / (1024 * 1024), v => v is >= 128 and <= 65536, problems) * 1024 * 1024,
             IsolateNetwork = Read(section, "IsolateNetwork", defaults.IsolateNetwork, _ => true, problems),
+            ReadOnlyFileSystem = Read(section, "ReadOnlyFileSystem", defaults.ReadOnlyFileSystem, _ => true, problems),
+            WorkerUids = ReadUidRange(section, defaults.WorkerUids, problems),
             WorkerAssemblyPath = section["WorkerPath"] is { Length: > 0 } path ? Path.GetFullPath(path) : defaults.WorkerAssemblyPath,
         };
         if (problems.Count > 0) throw new ProfileConfigurationException(problems, ProfileConfigurationException.HostTitle);
@@ -49,6 +51,14 @@ public static class IsolationConfiguration
         {
             throw new ProfileConfigurationException([$"{section.Path}: {error.Message}"], ProfileConfigurationException.HostTitle);
         }
+    }
+
+    private static UidRange ReadUidRange(IConfigurationSection section, UidRange fallback, List<string> problems)
+    {
+        if (section["WorkerUidRange"] is not { } text) return fallback;
+        if (UidRange.Parse(text, out var problem) is { } range) return range;
+        problems.Add($"{section.Path}:WorkerUidRange: {ConfiguredValue.Quote(text)} is not a uid range; {problem}");
+        return fallback;
     }
 
     private static T Read<T>(IConfigurationSection section, string key, T fallback, Func<T, bool> valid, List<string> problems)

@@ -187,6 +187,11 @@ public static class ServerApp
             HostLog.WorkersShareNetwork(logger, "unshare --net failed, or Isolation:IsolateNetwork is false");
         }
 
+        if (executor is { FileSystemReadOnly: false } && engine.Rules.Any(r => r.IsLoaded && !r.IsTrusted))
+        {
+            HostLog.WorkersFileSystemWritable(logger, "no mount namespace can be set up here (needs root with CAP_SYS_ADMIN), or Isolation:ReadOnlyFileSystem is false");
+        }
+
         foreach (var rule in engine.Rules.Where(r => !r.IsLoaded))
         {
             HostLog.PluginRefused(logger, rule.PluginName, rule.Id, rule.LoadMessage);

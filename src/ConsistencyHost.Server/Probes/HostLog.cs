@@ -17,6 +17,9 @@ internal static partial class HostLog
     [LoggerMessage(EventId = 1002, Level = LogLevel.Warning, Message = "Workers of untrusted plugins share the host's network: no network namespace can be created here ({Reason})")]
     public static partial void WorkersShareNetwork(ILogger logger, string reason);
 
+    [LoggerMessage(EventId = 1003, Level = LogLevel.Warning, Message = "Workers of untrusted plugins see the file system as their uid's permissions allow, not read-only: {Reason}")]
+    public static partial void WorkersFileSystemWritable(ILogger logger, string reason);
+
     [LoggerMessage(EventId = 1010, Level = LogLevel.Information, Message = "Worker of plugin {Plugin} ready: {Reason}")]
     public static partial void WorkerWarmedUp(ILogger logger, string plugin, string reason);
 

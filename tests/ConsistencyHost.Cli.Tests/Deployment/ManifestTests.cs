@@ -21,15 +21,20 @@ public sealed class ManifestTests
     }
 
     [Fact]
-    public async Task Deployment_ThreeNonRootReadOnlyReplicasWithProbesAndLimits()
+    public async Task Deployment_ThreeReadOnlyReplicasWithOnlyTheWorkersCapabilitiesProbesAndLimits()
     {
         var spec = (await Manifests.LoadAsync()).Single("Deployment").GetProperty("spec");
         var pod = spec.GetProperty("template").GetProperty("spec");
         var container = Assert.Single(pod.GetProperty("containers").EnumerateArray());
 
         Assert.Equal(3, spec.GetProperty("replicas").GetInt32());
-        Assert.True(pod.GetProperty("securityContext").GetProperty("runAsNonRoot").GetBoolean());
+        // Root, so that each untrusted plugin's worker gets a uid of its own (a non-root host refuses them), with
+        // every capability dropped but the five that needs (src/ConsistencyHost.Isolation/HostCredentials.cs).
+        Assert.Equal(0, pod.GetProperty("securityContext").GetProperty("runAsUser").GetInt32());
         var security = container.GetProperty("securityContext");
+        Assert.Equal(["ALL"], security.GetProperty("capabilities").GetProperty("drop").EnumerateArray().Select(c => c.GetString()));
+        Assert.Equal(["CHOWN", "DAC_OVERRIDE", "KILL", "SETGID", "SETUID"],
+            security.GetProperty("capabilities").GetProperty("add").EnumerateArray().Select(c => c.GetString()).Order(StringComparer.Ordinal));
         Assert.True(security.GetProperty("readOnlyRootFilesystem").GetBoolean());
         Assert.False(security.GetProperty("allowPrivilegeEscalation").GetBoolean());
         Assert.Equal("/tmp", MountOf(container, VolumeOf(pod, v => v.TryGetProperty("emptyDir", out _))));

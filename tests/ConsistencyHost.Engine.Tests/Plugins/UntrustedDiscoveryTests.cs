@@ -78,6 +78,34 @@ public sealed class UntrustedDiscoveryTests
     }
 
     [Fact]
+    public void Discover_ExecutorThatCannotIsolate_RefusesUntrustedCompiledAndSourcePluginsWithItsReasonAndLoadsTrustedOnes()
+    {
+        var trusted = "Lab.Trusted" + Guid.NewGuid().ToString("N");
+        var untrusted = "Lab.Untrusted" + Guid.NewGuid().ToString("N");
+        using var folder = PluginFolder.With();
+        VettingCorpus.DropCompiled(folder.Path, trusted, VettingCorpus.EmitSource(trusted, RuleSource));
+        VettingCorpus.DropCompiled(folder.Path, untrusted, VettingCorpus.EmitSource(untrusted, RuleSource));
+        PluginFolder.WriteFile(Path.Combine(folder.Path, "Lab.Source", "ProbeRule.cs"), RuleSource);
+        var executor = new RecordingExecutor { UnavailableReason = "worker isolation needs the host to run as root" };
+        var cache = Path.Combine(folder.Path, "..", "ch-source-cache-" + Guid.NewGuid().ToString("N"));
+
+        var rules = PluginDiscovery.Discover(folder.Path, cache, new UntrustedPlugins(plugin => plugin == trusted, executor, [])).ToDictionary(r => r.Plugin);
+
+        Assert.True(rules[trusted + ".dll"].IsLoaded, rules[trusted + ".dll"].LoadMessage);
+        foreach (var refused in new[] { rules[untrusted + ".dll"], rules["Lab.Source (source)"] })
+        {
+            Assert.False(refused.IsLoaded);
+            Assert.Equal("untrusted plugins run only in isolated workers, and this host cannot start them: "
+                + "worker isolation needs the host to run as root; the plugin was not run", refused.LoadMessage);
+        }
+
+        // Neither described by a worker nor compiled: nothing of the untrusted plugins ran anywhere.
+        Assert.Empty(executor.Described);
+        Assert.False(Directory.Exists(cache));
+        Assert.DoesNotContain(AssemblyLoadContext.All, context => context.Name == untrusted);
+    }
+
+    [Fact]
     public void ResolveAll_WorkerBoundOptionsWithProblems_AreStartUpErrorsPrefixedLikeTheHostsOwn()
     {
         var bound = new Dictionary<string, BoundOptions>
@@ -111,5 +139,7 @@ public sealed class UntrustedDiscoveryTests
             throw new InvalidOperationException("discovery never runs a rule");
 
         public string? HeldBackReason(RuleDescriptor rule) => null;
+
+        public string? UnavailableReason { get; init; }
     }
 }
