@@ -1,5 +1,7 @@
 using ConsistencyHost.Cli.CommandLine;
 using ConsistencyHost.Cli.Commands;
+using ConsistencyHost.Engine;
+using ConsistencyHost.Server.Hosting;
 
 namespace ConsistencyHost.Cli;
 
@@ -11,7 +13,7 @@ public static class Program
         "usage:\n  consistencyhost " + CheckCommand.Usage + "\n  consistencyhost " + RulesCommand.Usage +
         "\n  consistencyhost " + ServeCommand.Usage + "\n  consistencyhost " + EnvironmentsCommand.Usage +
         "\n  consistencyhost " + PeaksCommand.Usage + "\n  consistencyhost " + ProfilesCommand.Usage +
-        "\n  consistencyhost " + BatchCommand.Usage + "\n";
+        "\n  consistencyhost " + BatchCommand.Usage + "\n  consistencyhost --version\n";
 
     public static async Task<int> Main(string[] args)
     {
@@ -37,12 +39,23 @@ public static class Program
         "profiles" => ProfilesCommand.Run(rest, stdout),
         "batch" => await BatchCommand.RunAsync(rest, stdout),
         "help" or "--help" or "-h" => Print(stdout),
+        "--version" => PrintVersion(stdout),
         _ => throw new UsageException($"unknown command '{command}'; expected check, rules, serve, environments, peaks, profiles or batch"),
     };
 
     private static int Print(TextWriter stdout)
     {
         stdout.Write(Help);
+        return ExitCodes.Ok;
+    }
+
+    /// <summary>
+    /// The host's and the engine's versions, the same strings a running host gives in ListRules (the command line
+    /// is the host: <c>serve</c> runs it in this process).
+    /// </summary>
+    private static int PrintVersion(TextWriter stdout)
+    {
+        stdout.Write($"consistencyhost {ServerApp.Version}\nengine {BuildVersion.Engine}\n");
         return ExitCodes.Ok;
     }
 

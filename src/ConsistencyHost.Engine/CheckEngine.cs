@@ -61,7 +61,7 @@ public sealed class CheckEngine
     public CheckReport Check(EntrySubmission submission, CancellationToken cancellationToken = default)
     {
         var started = Stopwatch.GetTimestamp();
-        using var activity = EngineTelemetry.StartCheck(submission.EntryId);
+        using var activity = EngineTelemetry.StartCheck(submission.EntryId, submission.RequestId);
         CheckReport report;
         try
         {

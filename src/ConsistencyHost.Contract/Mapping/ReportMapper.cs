@@ -42,9 +42,13 @@ public static class ReportMapper
         InputError = new InputError { Field = field, Reason = reason },
     };
 
-    /// <summary>Maps the rule catalogue of an engine: where each rule runs, and quarantined rules with the reason.</summary>
-    public static ListRulesResponse ToRuleList(Engine.CheckEngine engine) =>
-        ToRuleList(engine.Rules, engine.IsolationOf, engine.HeldBackReason);
+    /// <summary>Maps the rule catalogue of an engine: where each rule runs, quarantined rules with the reason, the engine's version.</summary>
+    public static ListRulesResponse ToRuleList(Engine.CheckEngine engine)
+    {
+        var list = ToRuleList(engine.Rules, engine.IsolationOf, engine.HeldBackReason);
+        list.EngineVersion = Engine.BuildVersion.Engine;
+        return list;
+    }
 
     /// <summary>Maps the rule catalogue.</summary>
     public static ListRulesResponse ToRuleList(

@@ -35,6 +35,12 @@ public sealed record EntrySubmission
     /// such fragment as a finding and checks the rest.
     /// </summary>
     public bool StrictText { get; init; }
+
+    /// <summary>
+    /// The id of the call that brought the entry (the host's x-request-id), for traces; null when the entry did not
+    /// come through a host. Not part of the entry: it changes no check.
+    /// </summary>
+    public string? RequestId { get; init; }
 }
 
 /// <summary>One spectrum as submitted: acquisition facts plus exactly one data form.</summary>

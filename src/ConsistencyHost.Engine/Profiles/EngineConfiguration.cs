@@ -22,7 +22,7 @@ public static class EngineConfiguration
 {
     private static readonly string[] RootKeys = ["PluginsPath", "DefaultProfile", "RuleDeadlineMs", "Profiles", "TrustedPlugins", "Isolation", "ReportLimits"];
     private static readonly string[] ReportLimitKeys = ["MaxFindingsPerRule", "MaxMessageChars", "MaxReplyBytes"];
-    private static readonly string[] ProfileKeys = ["OnlyListedRules", "StrictText", "Rules"];
+    private static readonly string[] ProfileKeys = ["Description", "OnlyListedRules", "StrictText", "Rules"];
     private static readonly string[] RuleKeys = ["Enabled", "DeadlineMs", "Options", "Severities"];
 
     /// <summary>Reads the options; <paramref name="defaultPluginsPath"/> applies when the section names none.</summary>
@@ -76,6 +76,7 @@ public static class EngineConfiguration
         return new Profile
         {
             Name = section.Key,
+            Description = section["Description"] is { Length: > 0 } description ? description : null,
             OnlyListedRules = ReadBool(section, "OnlyListedRules", problems) ?? false,
             StrictText = ReadBool(section, "StrictText", problems) ?? false,
             Rules = section.GetSection("Rules").GetChildren().ToDictionary(r => r.Key, r => ReadRule(r, problems), StringComparer.Ordinal),

@@ -14,6 +14,9 @@ public sealed record Profile
     /// <summary>The profile's name, as requests refer to it.</summary>
     public required string Name { get; init; }
 
+    /// <summary>One line for people saying what the profile is for (shown by ListProfiles); null when none.</summary>
+    public string? Description { get; init; }
+
     /// <summary>When true, only the rules listed in <see cref="Rules"/> (and enabled there) run.</summary>
     public bool OnlyListedRules { get; init; }
 

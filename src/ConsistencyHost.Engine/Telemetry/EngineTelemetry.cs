@@ -37,10 +37,14 @@ public static class EngineTelemetry
     private static readonly Histogram<double> CheckDuration = Meter.CreateHistogram(TelemetryNames.CheckDuration, "ms", "One entry from intake to report", advice: DurationAdvice);
 
     /// <summary>Starts the activity of one check, or returns null when nobody listens.</summary>
-    public static Activity? StartCheck(string entryId)
+    /// <param name="entryId">The entry's id.</param>
+    /// <param name="requestId">The id of the call that brought the entry; null or empty adds no tag (the CLI's embedded engine).</param>
+    public static Activity? StartCheck(string entryId, string? requestId = null)
     {
         var activity = Source.StartActivity(TelemetryNames.CheckActivity);
-        activity?.SetTag(TelemetryNames.EntryIdTag, entryId);
+        if (activity is null) return null;
+        activity.SetTag(TelemetryNames.EntryIdTag, entryId);
+        if (!string.IsNullOrEmpty(requestId)) activity.SetTag(TelemetryNames.RequestIdTag, requestId);
         return activity;
     }
 

@@ -53,6 +53,9 @@ public static class TelemetryNames
     /// <summary>Activity tag: the entry id (traces only: ids are unbounded, so never a metric tag).</summary>
     public const string EntryIdTag = "consistencyhost.entry_id";
 
+    /// <summary>Activity tag: the request id of the call that brought the entry (x-request-id; traces only, as above).</summary>
+    public const string RequestIdTag = "consistencyhost.request_id";
+
     /// <summary>Activity tag: findings a rule or a check produced.</summary>
     public const string FindingCountTag = "consistencyhost.finding_count";
 }

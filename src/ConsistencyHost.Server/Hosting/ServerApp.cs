@@ -26,6 +26,9 @@ public static class ServerApp
     /// <summary>The default plugin folder: "plugins" beside the executable.</summary>
     public static string DefaultPluginsPath => Path.Combine(AppContext.BaseDirectory, "plugins");
 
+    /// <summary>The host's version (semantic version + source revision), as ListRules and <c>--version</c> report it.</summary>
+    public static string Version { get; } = BuildVersion.Of(typeof(ServerApp).Assembly);
+
     /// <summary>Builds the application; throws <see cref="ProfileConfigurationException"/> on bad configuration.</summary>
     public static WebApplication Build(ServerLaunch launch)
     {
@@ -63,12 +66,16 @@ public static class ServerApp
             options.EnableDetailedErrors = false;
             options.Interceptors.Add<ConcurrencyGate>();
             options.Interceptors.Add<InputErrorInterceptor>();
-        }).AddJsonTranscoding();
+        }).AddJsonTranscoding(transcoding =>
+            // The transcoder writes a grpc-status-details-bin trailer as the JSON error body; the Any it holds
+            // can only be written when its type is registered (otherwise the call becomes HTTP 500).
+            transcoding.TypeRegistry = BadRequestStatus.DetailTypes);
         builder.Services.AddGrpcReflection();
         HealthSetup.Add(builder.Services, engine, executor, HealthOptions.Read(builder.Configuration.GetSection("Server:Health")));
         TelemetrySetup.Add(builder);
 
         var app = builder.Build();
+        RequestIds.Use(app, endpoints);
         AccessGate.Use(app, endpoints, access);
         JsonBodyLimit.Use(app, endpoints, server.MaxReceiveMessageBytes);
         if (executor is not null)

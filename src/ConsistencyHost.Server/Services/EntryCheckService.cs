@@ -5,6 +5,7 @@ using ConsistencyHost.Contract.V1;
 using ConsistencyHost.Engine;
 using ConsistencyHost.Engine.Intake;
 using ConsistencyHost.Engine.Reports;
+using ConsistencyHost.Server.Hosting;
 using Grpc.Core;
 using Microsoft.Extensions.Logging;
 
@@ -13,13 +14,14 @@ namespace ConsistencyHost.Server.Services;
 /// <summary>
 /// The gRPC face of the engine. Findings are data; an unusable entry is INVALID_ARGUMENT in a unary call
 /// (mapped by <see cref="InputErrorInterceptor"/>) and an <c>input_error</c> reply inside a stream, so that one
-/// bad entry does not end a batch. Every entry is logged with its id, profile and timing (<see cref="CheckLog"/>).
+/// bad entry does not end a batch. Every entry is logged with its id, the call's request id, profile and timing
+/// (<see cref="CheckLog"/>); every reply carries the call's request id (<see cref="RequestIds"/>).
 /// </summary>
 public sealed class EntryCheckService(CheckEngine engine, StreamInFlight inFlight, ILogger<EntryCheckService> logger) : EntryCheck.EntryCheckBase
 {
     /// <inheritdoc />
     public override Task<CheckEntryResponse> CheckEntry(CheckEntryRequest request, ServerCallContext context) =>
-        Task.FromResult(Check(request, context.CancellationToken));
+        Task.FromResult(Check(request, RequestIds.Of(context), context.CancellationToken));
 
     /// <inheritdoc />
     /// <remarks>
@@ -36,12 +38,13 @@ public sealed class EntryCheckService(CheckEngine engine, StreamInFlight inFligh
         using var slots = inFlight.Open();
         using var stop = CancellationTokenSource.CreateLinkedTokenSource(context.CancellationToken);
         var pending = Channel.CreateBounded<CheckEntryRequest>(new BoundedChannelOptions(inFlight.LimitPerStream) { SingleReader = true, SingleWriter = true });
+        var requestId = RequestIds.Of(context);
         var reading = EntryStreamReader.ReadAsync(requestStream, pending.Writer, slots, stop.Token);
         try
         {
             await foreach (var request in pending.Reader.ReadAllAsync(context.CancellationToken))
             {
-                await responseStream.WriteAsync(CheckInStream(request, context.CancellationToken), context.CancellationToken);
+                await responseStream.WriteAsync(CheckInStream(request, requestId, context.CancellationToken), context.CancellationToken);
                 slots.Answered();
             }
         }
@@ -56,36 +59,47 @@ public sealed class EntryCheckService(CheckEngine engine, StreamInFlight inFligh
     }
 
     /// <inheritdoc />
-    public override Task<ListRulesResponse> ListRules(ListRulesRequest request, ServerCallContext context) =>
-        Task.FromResult(ReportMapper.ToRuleList(engine));
+    public override Task<ListRulesResponse> ListRules(ListRulesRequest request, ServerCallContext context)
+    {
+        var list = ReportMapper.ToRuleList(engine);
+        list.HostVersion = ServerApp.Version;
+        return Task.FromResult(list);
+    }
 
-    private CheckEntryResponse CheckInStream(CheckEntryRequest request, CancellationToken cancellationToken)
+    /// <inheritdoc />
+    public override Task<ListProfilesResponse> ListProfiles(ListProfilesRequest request, ServerCallContext context) =>
+        Task.FromResult(ProfileMapper.ToProfileList(engine));
+
+    private CheckEntryResponse CheckInStream(CheckEntryRequest request, string requestId, CancellationToken cancellationToken)
     {
         try
         {
-            return Check(request, cancellationToken);
+            return Check(request, requestId, cancellationToken);
         }
         catch (EntryInputException error)
         {
-            return ReportMapper.ToInputErrorResponse(request.EntryId, error.Field, error.Reason);
+            var response = ReportMapper.ToInputErrorResponse(request.EntryId, error.Field, error.Reason);
+            response.RequestId = requestId;
+            return response;
         }
     }
 
-    private CheckEntryResponse Check(CheckEntryRequest request, CancellationToken cancellationToken)
+    private CheckEntryResponse Check(CheckEntryRequest request, string requestId, CancellationToken cancellationToken)
     {
         var started = Stopwatch.GetTimestamp();
         CheckReport report;
         try
         {
-            report = engine.Check(SubmissionMapper.ToSubmission(request), cancellationToken);
+            report = engine.Check(SubmissionMapper.ToSubmission(request) with { RequestId = requestId }, cancellationToken);
         }
         catch (EntryInputException error)
         {
-            CheckLog.EntryRefused(logger, request.EntryId, error.Field, error.Reason);
+            CheckLog.EntryRefused(logger, request.EntryId, requestId, error.Field, error.Reason);
             throw;
         }
 
         var response = ReportMapper.ToResponse(report);
+        response.RequestId = requestId;
         Log(response, Stopwatch.GetElapsedTime(started).TotalMilliseconds);
         return response;
     }
@@ -96,7 +110,7 @@ public sealed class EntryCheckService(CheckEngine engine, StreamInFlight inFligh
         {
             if (run.Status is Contract.V1.RuleRunStatus.Failed or Contract.V1.RuleRunStatus.TimedOut or Contract.V1.RuleRunStatus.Crashed or Contract.V1.RuleRunStatus.Quarantined)
             {
-                CheckLog.RuleDidNotFinish(logger, response.EntryId, run.RuleId, run.Status.ToString(), run.ElapsedMs, run.Message);
+                CheckLog.RuleDidNotFinish(logger, response.EntryId, response.RequestId, run.RuleId, run.Status.ToString(), run.ElapsedMs, run.Message);
             }
             else
             {
@@ -104,6 +118,6 @@ public sealed class EntryCheckService(CheckEngine engine, StreamInFlight inFligh
             }
         }
 
-        CheckLog.EntryChecked(logger, response.EntryId, response.Profile, response.Findings.Count, response.HighestSeverity.ToString(), elapsedMs);
+        CheckLog.EntryChecked(logger, response.EntryId, response.RequestId, response.Profile, response.Findings.Count, response.HighestSeverity.ToString(), elapsedMs);
     }
 }

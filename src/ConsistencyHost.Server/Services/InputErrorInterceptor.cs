@@ -6,13 +6,14 @@ namespace ConsistencyHost.Server.Services;
 
 /// <summary>
 /// The one place where engine errors become gRPC status codes: unusable input is INVALID_ARGUMENT with the
-/// field path in the message and in the "field" trailer. Nothing else is translated here; an unexpected
-/// exception stays INTERNAL without details (EnableDetailedErrors is off).
+/// field path in the message, in the "field" trailer and as a google.rpc.BadRequest in the status details
+/// (<see cref="BadRequestStatus"/>). Nothing else is translated here; an unexpected exception stays INTERNAL
+/// without details (EnableDetailedErrors is off).
 /// </summary>
 public sealed class InputErrorInterceptor : Interceptor
 {
     /// <summary>Trailer that carries the offending field path for machine use.</summary>
-    public const string FieldTrailer = "field";
+    public const string FieldTrailer = BadRequestStatus.FieldTrailer;
 
     /// <inheritdoc />
     public override async Task<TResponse> UnaryServerHandler<TRequest, TResponse>(
@@ -24,9 +25,7 @@ public sealed class InputErrorInterceptor : Interceptor
         }
         catch (EntryInputException error)
         {
-            throw new RpcException(
-                new Status(StatusCode.InvalidArgument, $"{error.Field}: {error.Reason}"),
-                new Metadata { { FieldTrailer, error.Field } });
+            throw BadRequestStatus.Exception(error.Field, error.Reason);
         }
     }
 }

@@ -49,5 +49,6 @@ public sealed partial class DeploymentDocTests
             [TelemetryNames.CheckActivity, TelemetryNames.RuleActivity],
             ActivityRow().Matches(Guide).Select(m => m.Groups["name"].Value));
         Assert.Contains($"`{TelemetryNames.EntryIdTag}`", Guide, StringComparison.Ordinal);
+        Assert.Contains($"`{TelemetryNames.RequestIdTag}`", Guide, StringComparison.Ordinal);
     }
 }

@@ -28,7 +28,7 @@ public sealed class OpenApiDocumentTests
             .SelectMany(path => path.Value.EnumerateObject().Select(verb => $"{verb.Name} {path.Name}"))
             .Order(StringComparer.Ordinal);
 
-        Assert.Equal(["get /v1/rules", "post /v1/entries:check"], rules);
+        Assert.Equal(["get /v1/profiles", "get /v1/rules", "post /v1/entries:check"], rules);
         Assert.Equal(rules, documented);
     }
 
@@ -36,7 +36,7 @@ public sealed class OpenApiDocumentTests
     public void Schemas_HaveEveryFieldOfEachMessageByJsonName()
     {
         var schemas = Document.RootElement.GetProperty("components").GetProperty("schemas");
-        var messages = Reachable(CheckEntryRequest.Descriptor, CheckEntryResponse.Descriptor, ListRulesResponse.Descriptor);
+        var messages = Reachable(CheckEntryRequest.Descriptor, CheckEntryResponse.Descriptor, ListRulesResponse.Descriptor, ListProfilesResponse.Descriptor);
 
         foreach (var message in messages)
         {
@@ -67,9 +67,12 @@ public sealed class OpenApiDocumentTests
         {
             if (message.File.Package != "consistencyhost.v1" || seen.Contains(message)) continue;
             seen.Add(message);
+            // A map is a JSON object in the proto3 mapping (additionalProperties), not a schema of its entry type.
             foreach (var field in message.Fields.InFieldNumberOrder().Where(f => f.FieldType == FieldType.Message))
             {
-                pending.Push(field.MessageType);
+                var type = !field.IsMap ? field.MessageType
+                    : field.MessageType.FindFieldByNumber(2) is { FieldType: FieldType.Message } value ? value.MessageType : null;
+                if (type is not null) pending.Push(type);
             }
         }
 

@@ -1,8 +1,10 @@
 using ConsistencyHost.Server.Hosting;
+using ConsistencyHost.Server.Tests.Access;
 using ConsistencyHost.Tests.Shared;
 using Grpc.Net.Client;
 using Microsoft.AspNetCore.Builder;
 using Microsoft.Extensions.DependencyInjection;
+using Microsoft.Extensions.Logging;
 
 namespace ConsistencyHost.Server.Tests.EndToEnd;
 
@@ -15,9 +17,10 @@ internal sealed class RunningHost : IAsyncDisposable
     private readonly WebApplication _app;
     private readonly PluginFolder _plugins;
 
-    private RunningHost(WebApplication app, PluginFolder plugins, Uri address, Uri httpAddress)
+    private RunningHost(WebApplication app, PluginFolder plugins, Uri address, Uri httpAddress, CapturedLog log)
     {
         _app = app;
+        Log = log;
         _plugins = plugins;
         Address = address;
         HttpAddress = httpAddress;
@@ -30,6 +33,9 @@ internal sealed class RunningHost : IAsyncDisposable
     public Uri HttpAddress { get; }
 
     public GrpcChannel Channel { get; }
+
+    /// <summary>Every line the host logged (at the configured levels: Information and up by default).</summary>
+    public CapturedLog Log { get; }
 
     public int Port => Address.Port;
 
@@ -57,9 +63,11 @@ internal sealed class RunningHost : IAsyncDisposable
             throw;
         }
 
+        var log = new CapturedLog();
+        app.Services.GetRequiredService<ILoggerFactory>().AddProvider(log);
         await app.StartAsync().WaitAsync(TimeSpan.FromSeconds(60));
         var endpoints = ServerApp.Endpoints(app);
-        return new RunningHost(app, folder, endpoints.Grpc, endpoints.Http);
+        return new RunningHost(app, folder, endpoints.Grpc, endpoints.Http, log);
     }
 
     public async ValueTask DisposeAsync()

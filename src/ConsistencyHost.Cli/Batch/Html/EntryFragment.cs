@@ -12,11 +12,13 @@ internal static class EntryFragment
 {
     private static readonly EntryIntake Intake = new(IntakeLimits.Default);
 
-    public static string Render(BatchItem item, CheckEntryResponse response)
+    // anchor: the section's element id, unique on the page (SectionAnchors).
+    public static string Render(BatchItem item, CheckEntryResponse response, string anchor)
     {
         var html = new StringBuilder();
-        var worst = response.InputError is not null ? "input" : SeverityChartSvg.Name(response.HighestSeverity);
-        html.Append($"<section class=\"entry {worst}\"><h2><span class=\"badge {worst}\">{Label(worst)}</span> {E(response.EntryId)}</h2>");
+        var worst = response.InputError is not null ? "input" : response.HighestSeverity == Severity.Unspecified ? "clean" : SeverityChartSvg.Name(response.HighestSeverity);
+        var id = E(anchor);
+        html.Append($"<section class=\"entry {worst}\" id=\"{id}\"><h2><span class=\"badge {worst}\">{Label(worst)}</span> <a href=\"#{id}\">{E(response.EntryId)}</a></h2>");
         html.Append($"<p class=\"meta\">{E(item.Source)}{Structure(response)}{(response.Profile.Length > 0 ? $" · profile {E(response.Profile)}" : "")}</p>");
         html.Append("<div class=\"columns\"><div class=\"findings\">").Append(Findings(response)).Append("</div>");
         html.Append("<div class=\"plot\">").Append(Spectrum(item, response)).Append("</div></div></section>\n");
@@ -26,7 +28,7 @@ internal static class EntryFragment
     private static string Label(string worst) => worst switch
     {
         "input" => "unreadable",
-        "none" => "no findings",
+        "clean" => "no findings",
         _ => worst,
     };
 

@@ -16,6 +16,7 @@ internal sealed class HtmlReportWriter : IDisposable
     private readonly FileStream _scratch;
     private readonly SectionIndex _index;
     private readonly Dictionary<(string Rule, Severity Severity), int> _totals = [];
+    private readonly SectionAnchors _anchors = new();
 
     public HtmlReportWriter(string target)
     {
@@ -27,7 +28,7 @@ internal sealed class HtmlReportWriter : IDisposable
 
     public void Add(BatchItem item, CheckEntryResponse response)
     {
-        var bytes = Encoding.UTF8.GetBytes(EntryFragment.Render(item, response));
+        var bytes = Encoding.UTF8.GetBytes(EntryFragment.Render(item, response, _anchors.Next(response.EntryId)));
         _index.Add(SectionKey.Of(response), _scratch.Position, bytes.Length);
         _scratch.Write(bytes);
         foreach (var finding in response.Findings)
