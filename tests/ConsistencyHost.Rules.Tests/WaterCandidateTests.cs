@@ -25,6 +25,48 @@ public sealed class WaterCandidateTests
         Assert.Contains("total-protons-mismatch", report.Codes("integral-ratio"));
     }
 
+    // Benzylamine drawn for the data of N-benzylacetamide (typical CDCl3 shifts, from memory; invented entry of the lab
+    // scenario), given as a peak list with raw integrals and no proton counts, as from an exported peak table, the NH not
+    // listed. The acetyl singlet at 2.02 ppm sits in the CDCl3 water window (1.56, Gottlieb 1997 Table 1) and the integral
+    // scale counts it 3 H: it is the compound's, so the structure must draw a mismatch, not a water warning. Before,
+    // only stated counts kept a signal out of the water candidates, and this one was read as water.
+    private static EntrySubmission AcetamideDataAsRawIntegrals() => new()
+    {
+        EntryId = "AIS-LQ-TEST",
+        Structure = new StructureSource(StructureFormat.Smiles, "NCc1ccccc1"),
+        Spectra =
+        [
+            new SpectrumSubmission
+            {
+                Nucleus = "1H", FrequencyMHz = 400, Solvent = "CDCl3",
+                Signals =
+                [
+                    new Signal { RangeLowPpm = 7.25, RangeHighPpm = 7.36, Multiplicity = "m", Integral = 5.02 },
+                    new Signal { ShiftPpm = 4.42, Multiplicity = "d", Couplings = [new Coupling(5.7)], Integral = 2.05 },
+                    new Signal { ShiftPpm = 2.02, Multiplicity = "s", Integral = 3.04 },
+                ],
+            },
+        ],
+    };
+
+    [Fact]
+    public void Interpret_MethylSingletGivenAsRawIntegral_IsNotWater()
+    {
+        var reading = new EntryIntake(IntakeLimits.Default).Build(AcetamideDataAsRawIntegrals()).Analysis.Protons(0)!;
+
+        Assert.Null(reading.StatedCounts[2]);
+        Assert.Equal(3, reading.ProtonCounts[2]);
+        Assert.NotEqual(SignalRole.Water, reading.Roles[2]);
+    }
+
+    [Fact]
+    public void Check_MethylSingletGivenAsRawIntegral_DrawsNoWaterWarning()
+    {
+        var report = BuiltInRules.Engine.Check(AcetamideDataAsRawIntegrals()).AllRulesRan();
+
+        Assert.DoesNotContain("water-reported", report.Codes("solvent-residual"));
+    }
+
     [Fact]
     public void Check_UnintegratedLineAtTheWaterShift_IsStillWater()
     {

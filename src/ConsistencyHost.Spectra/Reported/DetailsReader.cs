@@ -64,8 +64,22 @@ internal static class DetailsReader
             sink.Add(item.Offset, Clip(item.Text), ReportedTextMessages.ExpectedCouplingContext);
             return false;
         }
+        if (!draft.HasCouplings && draft.Multiplicity is { } multiplicity && HasNoSplitting(multiplicity)
+            && !item.Text.Contains("Hz", StringComparison.Ordinal))
+        {
+            // "(s, 3)" or "(m, 5)": a singlet has no J and a bare m names none, so a number without "Hz" is most likely
+            // an integral written without its H; reading it as J = 3 Hz would be a silent misreading.
+            sink.Add(item.Offset, Clip(item.Text), ReportedTextMessages.ExpectedCountWithNucleus);
+            return false;
+        }
         CouplingReader.ReadBare(item, draft.Nucleus, decimalComma, sink, draft.Couplings);
         return true;
+    }
+
+    private static bool HasNoSplitting(string multiplicity)
+    {
+        var pattern = Multiplicity.Parse(multiplicity);
+        return pattern.IsSinglet || (pattern.IsMultiplet && pattern.Components.Count == 0 && pattern.SecondOrderLabel is null);
     }
 
     /// <summary>"2H", "2 H", "0.5H", "2C", "3F", "1P".</summary>

@@ -7,14 +7,16 @@ namespace ConsistencyHost.Spectra.Reported;
 /// </summary>
 internal static class ProseClauses
 {
+    private const string ElementalAnalysis = "elemental analysis";
+
     // Checked in order, case-insensitively, at the start of a clause; a word must end at a non-letter.
     private static readonly (string Word, string Kind)[] Known =
     [
         ("Rf", "Rf"), ("R f", "Rf"), ("TLC", "Rf"),
         ("mp", "mp"), ("m.p.", "mp"), ("melting point", "mp"), ("bp", "bp"), ("b.p.", "bp"),
         ("FTIR", "IR"), ("FT-IR", "IR"), ("IR", "IR"), ("UV", "UV"),
-        ("Anal.", "elemental analysis"), ("Anal", "elemental analysis"), ("Elemental analysis", "elemental analysis"),
-        ("Calcd for C", "elemental analysis"), ("Found: C", "elemental analysis"), ("Found C", "elemental analysis"),
+        ("Anal.", ElementalAnalysis), ("Anal", ElementalAnalysis), ("Elemental analysis", ElementalAnalysis),
+        ("Calcd for C", ElementalAnalysis), ("Found: C", ElementalAnalysis), ("Found C", ElementalAnalysis),
         ("Yield", "yield"), ("[α]", "optical rotation"), ("[a]D", "optical rotation"), ("αD", "optical rotation"),
         ("LRMS", "low-resolution MS"), ("MS (", "low-resolution MS"), ("GC-MS", "low-resolution MS"), ("LC-MS", "low-resolution MS"),
         ("EI-MS", "low-resolution MS"), ("ESI-MS", "low-resolution MS"), ("EIMS", "low-resolution MS"), ("ESIMS", "low-resolution MS"),
@@ -62,6 +64,8 @@ internal static class ProseClauses
             else if (ch is ')' or ']') depth = Math.Max(0, depth - 1);
             else if (depth == 0 && (ch == ';' || (ch == '.' && (i + 1 == end || TextCursor.IsSpace(text[i + 1])))))
             {
+                // "Anal. Calcd for C10H12O2: C, 73.15; H, 7.37": the ';' separates the elements of one analysis.
+                if (ch == ';' && KindAt(text, SkipBlanks(text, from, i)) == ElementalAnalysis) continue;
                 // "Anal." and "m.p." keep their dot: a clause is never just the abbreviation.
                 if (ch == '.' && KindAt(text, from) is not null && IsAbbreviationDot(text, from, i)) continue;
                 Emit(text, from, i, clause);
@@ -70,6 +74,12 @@ internal static class ProseClauses
         }
 
         Emit(text, from, end, clause);
+    }
+
+    private static int SkipBlanks(string text, int from, int to)
+    {
+        while (from < to && TextCursor.IsSpace(text[from])) from++;
+        return from;
     }
 
     private static bool IsAbbreviationDot(string text, int from, int dot) =>

@@ -19,6 +19,7 @@ public static class ReportedTextMessages
     public const string ExpectedOneCount = "one count per signal";
     public const string ExpectedCouplingValue = "a coupling constant in Hz such as 7.1";
     public const string ExpectedCouplingContext = "a multiplicity or 'J =' before a bare coupling value";
+    public const string ExpectedCountWithNucleus = "a count with its nucleus such as 3H (a bare number after s or m is not a coupling)";
     public const string ExpectedUnambiguousDecimal =
         "a decimal point (7.26), or decimal commas used from the first shift of the list on (7,26 ; 7,20)";
     public const string ExpectedHrmsCalculated = "'calcd for <ion formula> <m/z>' or 'found <m/z>, <ion formula> requires <m/z>'";

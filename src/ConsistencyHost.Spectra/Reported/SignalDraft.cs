@@ -23,6 +23,7 @@ internal sealed class SignalDraft(int offset, Nucleus nucleus)
     public List<string> Assignments => assignments ??= [];
     public List<string> Notes => notes ??= [];
     public bool HasNotes => notes is { Count: > 0 };
+    public bool HasCouplings => couplings is { Count: > 0 };
     public bool HasDetails { get; set; }
 
     public bool HasCount => ProtonCount is not null || CarbonCount is not null || NucleusCount is not null;

@@ -7,9 +7,21 @@ namespace ConsistencyHost.Spectra.Solvents;
 /// </summary>
 /// <remarks>Tables: Gottlieb et al. 1997; Fulmer et al. 2010 (see <see cref="ResidualSolventTable"/>, <see cref="ImpurityTable"/>).
 /// A range signal matches when the tabulated shift lies inside the range widened by the window.</remarks>
-public sealed class ResidualMatcher(ResidualMatchOptions? options = null)
+public sealed class ResidualMatcher
 {
-    private readonly ResidualMatchOptions options = options ?? ResidualMatchOptions.Default;
+    private readonly ResidualMatchOptions options;
+    private readonly ShiftWindow protonLine;
+    private readonly ShiftWindow carbonLine;
+    private readonly ShiftWindow exchangeableGroup;
+
+    /// <summary>A matcher with <paramref name="options"/> (the documented defaults when null).</summary>
+    public ResidualMatcher(ResidualMatchOptions? options = null)
+    {
+        this.options = options ?? ResidualMatchOptions.Default;
+        protonLine = Symmetric(this.options.ProtonWindowPpm, "1H residual or C–H impurity line");
+        carbonLine = Symmetric(this.options.CarbonWindowPpm, "13C line");
+        exchangeableGroup = Symmetric(this.options.ExchangeableImpurityWindowPpm, "exchangeable impurity group");
+    }
 
     /// <summary>Matches the signals of <paramref name="spectrum"/> using its nucleus and solvent.</summary>
     public ResidualMatchResult Match(Spectrum spectrum)
@@ -60,21 +72,22 @@ public sealed class ResidualMatcher(ResidualMatchOptions? options = null)
     {
         foreach (var line in lines)
         {
-            var window = WindowFor(line, solvent);
-            if (Deviation(signal, line.ShiftPpm, window) is not { } deviation) continue;
+            if (Deviation(signal, line.ShiftPpm, WindowFor(line, solvent)) is not { } deviation) continue;
             var kind = line.Kind == SolventLineKind.Water ? ResidualMatchKind.Water : ResidualMatchKind.ResidualSolvent;
             into.Add(new ResidualMatch(index, kind, solvent, line.Species, line.ShiftPpm, deviation, line.Source));
         }
     }
 
-    private double WindowFor(ResidualSolventLine line, string solvent)
+    private ShiftWindow WindowFor(ResidualSolventLine line, string solvent)
     {
-        if (line.Nucleus == Nucleus.C13) return options.CarbonWindowPpm;
-        if (solvent == "D2O") return options.HodInD2OWindowPpm;
-        if (line.Kind == SolventLineKind.Residual) return options.ProtonWindowPpm;
-        if (solvent == "DMSO-d6") return options.DmsoWaterWindowPpm;
-        return options.WideWaterSolvents.Contains(solvent) ? options.WideWaterWindowPpm : options.WaterWindowPpm;
+        if (line.Nucleus == Nucleus.C13) return carbonLine;
+        // HOD is the residual line of D2O itself, and it behaves as water does (temperature only).
+        var water = line.Kind == SolventLineKind.Water || solvent == "D2O";
+        if (!water) return protonLine;
+        return options.WaterWindows.TryGetValue(solvent, out var window) ? window : WaterWindowTable.General;
     }
+
+    private static ShiftWindow Symmetric(double ppm, string what) => new(ppm, ppm, what);
 
     private void MatchImpurity(SolventRows.ImpurityRows impurity, Nucleus nucleus, IReadOnlyList<Signal> signals,
         List<ResidualMatch> into, List<ImpurityEvidence> evidence)
@@ -83,7 +96,7 @@ public sealed class ResidualMatcher(ResidualMatchOptions? options = null)
         var matched = 0;
         foreach (var (group, shift) in impurity.Shifts)
         {
-            var window = nucleus == Nucleus.C13 ? options.CarbonWindowPpm : group.Exchangeable ? options.WaterWindowPpm : options.ProtonWindowPpm;
+            var window = nucleus == Nucleus.C13 ? carbonLine : group.Exchangeable ? exchangeableGroup : protonLine;
             var hit = false;
             for (var i = 0; i < signals.Count; i++)
             {
@@ -97,11 +110,10 @@ public sealed class ResidualMatcher(ResidualMatchOptions? options = null)
     }
 
     /// <summary>Signed deviation when the signal lies within the window of <paramref name="reference"/>; null otherwise.</summary>
-    private static double? Deviation(Signal signal, double reference, double window)
+    private static double? Deviation(Signal signal, double reference, ShiftWindow window)
     {
-        const double Epsilon = 1e-9; // a value exactly on the window edge matches, despite binary rounding
-        if (signal.ShiftPpm is { } x) return Math.Abs(x - reference) <= window + Epsilon ? Math.Round(x - reference, 6) : null;
+        if (signal.ShiftPpm is { } x) return window.Contains(reference, x) ? Math.Round(x - reference, 6) : null;
         if (signal.RangeLowPpm is not { } low || signal.RangeHighPpm is not { } high) return null;
-        return reference >= low - window - Epsilon && reference <= high + window + Epsilon ? 0 : null;
+        return window.Overlaps(reference, low, high) ? 0 : null;
     }
 }

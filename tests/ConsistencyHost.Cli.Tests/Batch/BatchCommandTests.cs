@@ -54,6 +54,31 @@ public sealed partial class BatchCommandTests : IDisposable
         Assert.Contains("<g class=\"peak flagged\">", dom, StringComparison.Ordinal);
     }
 
+    // Issue 13: batch reads reported text leniently (the fragment becomes a finding beside the other rules'); --strict
+    // refuses the entry. "zz" is not a multiplicity (docs/spectra.md vocabulary); no solvent is stated.
+    [Fact]
+    public async Task Batch_UnreadableFragment_IsAFindingUnlessStrict()
+    {
+        var input = Directory.CreateDirectory(Path.Combine(_out, "in")).FullName;
+        await File.WriteAllTextAsync(Path.Combine(input, "AIS-LQ-E013.json"), JsonSerializer.Serialize(new
+        {
+            entryId = "AIS-LQ-E013",
+            structure = new { smiles = "CC(=O)c1ccc(C)cc1" },
+            reportedText = new[] { "1H NMR (400 MHz) δ 7.86 (d, J = 8.2 Hz, 2H), 7.26 (zz, 2H), 2.57 (s, 3H), 2.41 (s, 3H)." },
+        }));
+        var lenientOut = Path.Combine(_out, "lenient");
+        var strictOut = Path.Combine(_out, "strict");
+
+        var (_, lenientStdout, lenientStderr) = await CliProcess.RunAsync("batch", input, "--out", lenientOut);
+        var (_, strictStdout, strictStderr) = await CliProcess.RunAsync("batch", input, "--out", strictOut, "--strict");
+
+        Assert.Contains("1 entries, 0 with an error", lenientStdout, StringComparison.Ordinal);
+        using var report = JsonDocument.Parse(File.ReadLines(Path.Combine(lenientOut, "reports.jsonl")).Single());
+        var codes = report.RootElement.GetProperty("findings").EnumerateArray().Select(f => f.GetProperty("code").GetString()).ToList();
+        Assert.True(codes.Contains("text-unreadable") && codes.Contains("solvent-not-stated"), string.Join(", ", codes) + lenientStderr);
+        Assert.True(strictStdout.Contains("1 entries, 1 with an error", StringComparison.Ordinal), strictStdout + strictStderr);
+    }
+
     [Fact]
     public async Task Batch_Quartet_IsDrawnWithBinomialIntensities()
     {

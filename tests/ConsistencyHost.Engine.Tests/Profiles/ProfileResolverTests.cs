@@ -1,3 +1,4 @@
+using ConsistencyHost.Engine.Intake;
 using ConsistencyHost.Engine.Profiles;
 using ConsistencyHost.Sdk.Findings;
 using ConsistencyHost.Tests.Shared;
@@ -114,6 +115,25 @@ public sealed class ProfileResolverTests
         Assert.Equal(Severity.Warning, Assert.Single(relaxed.Findings).Finding.Severity);
         Assert.Equal(Severity.Error, Assert.Single(severe.Findings).Finding.Severity);
         Assert.Equal("strict", severe.Profile);
+    }
+
+    // Issue 13: a profile's StrictText keeps the refusal of unreadable reported text; the default profile reads it
+    // leniently. "zz" is not a multiplicity (docs/spectra.md vocabulary); no solvent is stated.
+    [Fact]
+    public void Check_ProfileStrictText_RefusesWhatTheDefaultProfileReportsAsAFinding()
+    {
+        using var folder = PluginFolder.With("ConsistencyHost.Rules.SpectrumMetadata");
+        var engine = new CheckEngine(new EngineOptions { PluginsPath = folder.Path, Profiles = [new Profile { Name = "refusing", StrictText = true }] });
+        const string text = "1H NMR (400 MHz) δ 7.86 (d, J = 8.2 Hz, 2H), 7.26 (zz, 2H), 2.57 (s, 3H).";
+        var entry = new EntrySubmission { EntryId = "AIS-LQ-TEST", ReportedText = [text] };
+
+        var lenient = engine.Check(entry);
+        var error = Assert.Throws<EntryInputException>(() => engine.Check(entry with { Profile = "refusing" }));
+
+        var unreadable = Assert.Single(lenient.Findings, f => f.Finding.Code == "text-unreadable");
+        Assert.Equal(Severity.Warning, unreadable.Finding.Severity);
+        Assert.Contains(lenient.Findings, f => f.Finding.Code == "solvent-not-stated");
+        Assert.Contains("'zz'", error.Message, StringComparison.Ordinal);
     }
 
     [Fact]

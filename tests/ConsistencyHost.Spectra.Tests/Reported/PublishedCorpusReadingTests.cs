@@ -14,7 +14,7 @@ public sealed class PublishedCorpusReadingTests
     // Measured on this corpus when issue 13's spellings were added (before: 58 strict, 63 lenient). A ratchet, not a
     // target: raise it when a new spelling is read, never lower it to let a change through.
     private const int StrictCleanFloor = 96;
-    private const int LenientCleanFloor = 107;
+    private const int LenientCleanFloor = 132;
 
     private sealed record Entry(string Id, string Smiles, string Text, string Note);
 

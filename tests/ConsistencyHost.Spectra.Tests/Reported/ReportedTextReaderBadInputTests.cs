@@ -52,6 +52,15 @@ public sealed class ReportedTextReaderBadInputTests
         { H + "7.26 (s, 1H) [see text].", 39, "[see text].", M.ExpectedSeparator },
         { H + "7.26 (ps x, 1H).", 32, "ps x", M.ExpectedDetail },
         { "HRMS (ESI) m/z: found 182.0810, C9H12NO2 182.0812.", 41, "182.0812.", M.ExpectedHrmsRequires },
+        // The "Not read" list of docs/spectra.md, one row per entry not already above (negative J and a missing
+        // separator are): each stays a problem rather than a guess.
+        { H + "7.26 (s, 3), 2.05 (s, 3H).", 35, "3", M.ExpectedCountWithNucleus },
+        { H + "7.26 (m, 5).", 35, "5", M.ExpectedCountWithNucleus },
+        { H + "7.26 (d overlapped, 1H).", 32, "d overlapped", M.ExpectedDetail },
+        { H + "2.05 (d, J, 3H).", 36, "", M.ExpectedCouplingValue },
+        { H + "7.20 to 7.30 (m, 2H).", 31, "to 7.30 (m, 2H).", M.ExpectedSeparator },
+        { "13C NMR (101 MHz, CDCl3) δ 128.3 (2), 77.0.", 34, "2", M.ExpectedCouplingContext },
+        { H + "7.10À7.00 (m, 1H).", 30, "À7.00 (m, 1H).", M.ExpectedSeparator },
     };
 
     // Common practice: yield, mp and Rf prose before the NMR data. Strict refuses it; lenient skips it with a note.

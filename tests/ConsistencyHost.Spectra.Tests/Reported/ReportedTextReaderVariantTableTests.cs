@@ -67,6 +67,7 @@ public sealed class ReportedTextReaderVariantTableTests
         { Common, "13C NMR (101 MHz, CDCl3) δ 162.4 (d, 1JC–F = 246.0 Hz), 115.4 (d, JC-F = 21.5 Hz), 130.0 (d, 3JC,F = 8.1 Hz)",
             "13C 101 CDCl3 | 162.4 d J1:246F ; 115.4 d J21.5F ; 130 d J3:8.1F" },
         { "si-012", "13C{1H} NMR (126 MHz, CDCl3) δ 165.8 (C−F, 1JC−F = 267.5 Hz), 132.6", "13C{1H} 126 CDCl3 | 165.8 J1:267.5F @C−F ; 132.6" },
+        { Common, "13C NMR (101 MHz, CDCl3) δ 115.4 (d, 2JC,F = 21.5 Hz)", "13C 101 CDCl3 | 115.4 d J2:21.5F" },
     };
 
     [Theory]

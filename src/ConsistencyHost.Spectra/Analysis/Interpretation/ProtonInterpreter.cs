@@ -34,8 +34,8 @@ public static class ProtonInterpreter
         var minor = spectrum.Signals.Select(s => s.IsMinorSpecies()).ToArray();
         var rotamerPairs = RotamerShares.Pair(spectrum.Signals, minor);
         var stated = RotamerShares.Summed(spectrum.Signals, rotamerPairs);
-        var candidates = Candidates(residuals, spectrum.Signals, molecule, minor, stated);
         var (counts, fit) = ProtonCounts(spectrum.Signals, stated, minor, fast);
+        var candidates = Candidates(residuals, spectrum.Signals, molecule, minor, stated, counts);
         var best = Choose(spectrum.Signals, counts, minor, candidates, fast, hydrogenWindows);
         var classes = fast;
         if (splits.Count > 0 && !IsPerfect(best))
@@ -80,12 +80,14 @@ public static class ProtonInterpreter
     /// A signal the author integrated to this many protons or more is the compound's, never water: a water trace is
     /// one exchange-averaged line that authors leave unintegrated or integrate to a fraction or to 2 H (its
     /// H2O), while a 3 H or 9 H singlet in the water window is a methyl or tert-butyl group (common practice).
-    /// Reading such a line as water would hide a wrong structure behind a water warning.
+    /// Reading such a line as water would hide a wrong structure behind a water warning. A list of raw integrals
+    /// (no stated counts) is judged by the counts the integral scale gives it.
     /// </summary>
     private const double MinCompoundCountNotWater = 2.5;
 
     /// <summary>Signals that may not be the compound's, each with the role it would have.</summary>
-    private static Dictionary<int, SignalRole> Candidates(ResidualMatchResult residuals, IReadOnlyList<Signal> signals, Molecule molecule, bool[] minor, double?[] stated)
+    private static Dictionary<int, SignalRole> Candidates(ResidualMatchResult residuals, IReadOnlyList<Signal> signals, Molecule molecule, bool[] minor, double?[] stated,
+        int?[] counts)
     {
         var selfImpurities = residuals.Impurities.Where(e => SameCompound.Is(molecule, e.Impurity.Smiles)).Select(e => e.Impurity.Name).ToHashSet(StringComparer.Ordinal);
         var credible = residuals.Impurities.Where(e => e.MeetsMinimum).Select(e => e.Impurity.Name).ToHashSet(StringComparer.Ordinal);
@@ -94,7 +96,7 @@ public static class ProtonInterpreter
         {
             if (minor[match.SignalIndex] || result.ContainsKey(match.SignalIndex)) continue;
             if (!ResidualShape.Fits(signals[match.SignalIndex], match)) continue;
-            if (match.Kind == ResidualMatchKind.Water && stated[match.SignalIndex] >= MinCompoundCountNotWater) continue;
+            if (match.Kind == ResidualMatchKind.Water && (stated[match.SignalIndex] ?? counts[match.SignalIndex]) >= MinCompoundCountNotWater) continue;
             var role = match.Kind switch
             {
                 ResidualMatchKind.ResidualSolvent => SignalRole.ResidualSolvent,
