@@ -9,7 +9,7 @@ import math
 import re
 import sys
 
-CHECKED = re.compile(r"Checked entry \S+ with profile \S+: \d+ finding\(s\), highest \S+, ([0-9.]+) ms")
+CHECKED = re.compile(r"Checked entry \S+ (?:\(request \S+\) )?with profile \S+: \d+ finding\(s\), highest \S+, ([0-9.]+) ms")
 
 
 def nearest_rank(sorted_values, p):
